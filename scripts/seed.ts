@@ -1,0 +1,22 @@
+/** `npm run seed` seeds the demo when the database is empty; `npm run seed -- --reset` rebuilds it. */
+import { ensureLocalDatabase } from "./local-db.ts";
+import { connect } from "../server/db/connect-and-migrate.ts";
+import { resetDemo, seedDemoIfEmpty } from "../server/db/seed/demo.ts";
+
+if (process.env.NODE_ENV === "production") {
+  console.error("The demo is never seeded when NODE_ENV=production.");
+  process.exit(1);
+}
+await ensureLocalDatabase();
+const database = await connect(process.env.DATABASE_URL!);
+const password = process.env.DEMO_PASSWORD ?? "forthright-demo";
+try {
+  if (process.argv.includes("--reset")) {
+    await resetDemo(database.db, { password });
+    console.log("Rebuilt the demo dealership.");
+  } else {
+    console.log((await seedDemoIfEmpty(database.db, { password })) ? "Seeded the demo dealership." : "Demo data already present.");
+  }
+} finally {
+  await database.close();
+}

@@ -1,0 +1,35 @@
+/**
+ * `npm start`: database up (installing MariaDB if needed), migrations, demo seed on first start, client build,
+ * then the server on http://127.0.0.1:3000.
+ */
+import { build } from "vite";
+import { ensureLocalDatabase } from "./local-db.ts";
+import { connect } from "../server/db/connect-and-migrate.ts";
+import { seedDemoIfEmpty, DEMO_USERS } from "../server/db/seed/demo.ts";
+import { main } from "../server/index.ts";
+
+await ensureLocalDatabase();
+const production = process.env.NODE_ENV === "production";
+const password = process.env.DEMO_PASSWORD ?? "forthright-demo";
+{
+  const database = await connect(process.env.DATABASE_URL!);
+  try {
+    if (!production) {
+      const seeded = await seedDemoIfEmpty(database.db, { password });
+      console.log(seeded ? "Seeded the demo dealership." : "Demo data already present; keeping it.");
+    }
+  } finally {
+    await database.close();
+  }
+}
+if (process.env.SKIP_BUILD !== "1") {
+  console.log("Building the client…");
+  await build({ logLevel: "warn" });
+}
+const { ctx } = await main();
+console.log(`\nForthright is running at ${ctx.config.publicUrl}\n`);
+if (!production) {
+  console.log("Demo sign-ins (password: " + (process.env.DEMO_PASSWORD ? "the value of DEMO_PASSWORD" : password) + "):");
+  for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(10)} ${u.email}`);
+  console.log("\nStop the database later with `npm run db:stop`.\n");
+}

@@ -1,0 +1,31 @@
+// `npm test`: type checks, the client build, then every vitest suite (unit, API, end-to-end), ending with the
+// plain "N passed, N failed" line that CI reads.
+import { spawnSync } from "node:child_process";
+import { mkdirSync, readFileSync, existsSync, rmSync } from "node:fs";
+
+const env = { ...process.env, NO_COLOR: "1", FORCE_COLOR: "0" };
+const run = (cmd, args) => spawnSync(cmd, args, { stdio: "inherit", env }).status === 0;
+let passed = 0;
+let failed = 0;
+
+console.log("== Type check (tsc --noEmit)");
+run("node_modules/.bin/tsc", ["--noEmit"]) ? passed++ : failed++;
+
+console.log("== Client build (vite build)");
+run("node_modules/.bin/vite", ["build", "--logLevel", "warn"]) ? passed++ : failed++;
+
+mkdirSync("test-results", { recursive: true });
+const report = "test-results/vitest.json";
+if (existsSync(report)) rmSync(report);
+console.log("== Tests (vitest)");
+const extra = process.argv.slice(2);
+run("node_modules/.bin/vitest", ["run", "--reporter=default", "--reporter=json", `--outputFile=${report}`, ...extra]);
+if (existsSync(report)) {
+  const r = JSON.parse(readFileSync(report, "utf8"));
+  passed += r.numPassedTests;
+  failed += r.numFailedTests + (r.numFailedTestSuites ?? 0);
+} else {
+  failed++;
+}
+console.log(`${passed} passed, ${failed} failed`);
+process.exit(failed ? 1 : 0);

@@ -1,0 +1,78 @@
+import express, { type Express } from "express";
+import helmet from "helmet";
+import { pinoHttp } from "pino-http";
+import { randomUUID } from "node:crypto";
+import type { AppContext } from "./lib/context.ts";
+import { loadSession } from "./middleware/authenticate.ts";
+import { originCheck } from "./middleware/origin-check.ts";
+import { apiNotFound, errorHandler } from "./middleware/error-handler.ts";
+import { healthRoutes } from "./modules/health/health.routes.ts";
+import { authRoutes } from "./modules/auth/auth.routes.ts";
+import { usersRoutes } from "./modules/users/users.routes.ts";
+import { dealershipRoutes, publicDealershipRoutes } from "./modules/dealerships/dealerships.routes.ts";
+import { clientRoutes } from "./modules/client/client.routes.ts";
+
+/** Builds the whole HTTP application without listening, so tests drive it directly. */
+export function createApp(ctx: AppContext): Express {
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", ctx.config.TRUST_PROXY ? 1 : false);
+
+  app.use(
+    pinoHttp({
+      logger: ctx.logger,
+      genReqId: (req, res) => {
+        const id = randomUUID();
+        res.setHeader("X-Request-Id", id);
+        return id;
+      },
+      // Request logs name the route and outcome only: bodies and cookies carry customers' details.
+      serializers: {
+        req: (req) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res) => ({ statusCode: res.statusCode }),
+      },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
+      autoLogging: { ignore: (req) => req.url === "/api/health" },
+    }),
+  );
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          "default-src": ["'self'"],
+          "script-src": ["'self'"],
+          "style-src": ["'self'", "'unsafe-inline'"],
+          "img-src": ["'self'", "data:", "blob:"],
+          "font-src": ["'self'"],
+          "connect-src": ["'self'"],
+          "frame-ancestors": ["'none'"],
+          "form-action": ["'self'"],
+          "object-src": ["'none'"],
+          "base-uri": ["'self'"],
+          "upgrade-insecure-requests": ctx.config.publicUrl.startsWith("https:") ? [] : null,
+        },
+      },
+      strictTransportSecurity: ctx.config.publicUrl.startsWith("https:"),
+      crossOriginEmbedderPolicy: false,
+      referrerPolicy: { policy: "strict-origin-when-cross-origin" },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: "512kb" }));
+  api.use(loadSession(ctx.auth));
+  api.use(originCheck([ctx.config.publicUrl]));
+  api.use("/health", healthRoutes(ctx));
+  api.use("/auth", authRoutes(ctx));
+  api.use("/users", usersRoutes(ctx));
+  api.use("/dealership", dealershipRoutes(ctx));
+  api.use("/public/dealership", publicDealershipRoutes(ctx));
+  api.use(apiNotFound);
+  app.use("/api", api);
+
+  app.use(clientRoutes(ctx));
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,5 @@
+export * from "./dealerships.ts";
+export * from "./users.ts";
+export * from "./sessions.ts";
+export * from "./audit-log.ts";
+export * from "./rate-limits.ts";

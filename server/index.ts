@@ -1,0 +1,37 @@
+import { createServer } from "node:http";
+import { createApp } from "./app.ts";
+import { createContext } from "./lib/boot.ts";
+
+/** Process entry: config, database, listen, and a graceful shutdown that lets requests in flight finish. */
+export async function main() {
+  const ctx = await createContext();
+  const app = createApp(ctx);
+  const server = createServer(app);
+  server.keepAliveTimeout = 65_000;
+  await new Promise<void>((resolve) => server.listen(ctx.config.PORT, ctx.config.HOST, resolve));
+  ctx.logger.info({ url: ctx.config.publicUrl }, "Forthright is listening");
+
+  let stopping = false;
+  const stop = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    ctx.logger.info({ signal }, "shutting down");
+    const force = setTimeout(() => process.exit(1), 10_000);
+    force.unref();
+    server.close(async () => {
+      await ctx.database.close().catch(() => undefined);
+      process.exit(0);
+    });
+    server.closeIdleConnections();
+  };
+  process.on("SIGTERM", () => stop("SIGTERM"));
+  process.on("SIGINT", () => stop("SIGINT"));
+  return { ctx, server };
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  main().catch((err) => {
+    console.error(err instanceof Error ? err.message : err);
+    process.exit(1);
+  });
+}

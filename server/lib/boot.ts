@@ -1,0 +1,60 @@
+import { pino, type Logger } from "pino";
+import { sql } from "drizzle-orm";
+import { loadConfig, type Config } from "../config/index.ts";
+import { connect } from "../db/client.ts";
+import { applyMigrations } from "../db/migrate.ts";
+import { createAuth } from "../modules/auth/lucia.ts";
+import { createLimiters, defaultLimits, type LimitSettings } from "../middleware/rate-limit.ts";
+import type { AppContext } from "./context.ts";
+
+export function createLogger(config: Config): Logger {
+  return pino({ level: config.LOG_LEVEL, redact: ["req.headers.cookie", "req.headers.authorization"] });
+}
+
+/** Every acknowledged commit must survive a crash; refuse to run on a server configured otherwise. */
+async function checkDurability(ctx: AppContext) {
+  const [rows] = (await ctx.database.db.execute(sql`select @@innodb_flush_log_at_trx_commit as v`)) as unknown as [Array<{ v: number }>];
+  const value = Number(rows[0]?.v);
+  if (value !== 1) {
+    throw new Error(`MariaDB has innodb_flush_log_at_trx_commit=${value}; Forthright needs 1 so no acknowledged write is lost.`);
+  }
+}
+
+/** Serialises migrations between instances that start together. */
+async function migrateWithLock(ctx: AppContext) {
+  const conn = await ctx.database.pool.getConnection();
+  try {
+    await conn.query("SELECT GET_LOCK('forthright_migrate', 60)");
+    await applyMigrations(ctx.database.db);
+  } finally {
+    await conn.query("SELECT RELEASE_LOCK('forthright_migrate')").catch(() => undefined);
+    conn.release();
+  }
+}
+
+export interface BootOptions {
+  env?: NodeJS.ProcessEnv;
+  config?: Partial<Config>;
+  limits?: LimitSettings;
+  logger?: Logger;
+  now?: () => Date;
+  migrate?: boolean;
+}
+
+export async function createContext(options: BootOptions = {}): Promise<AppContext> {
+  const config = { ...loadConfig(options.env), ...options.config } as Config;
+  const logger = options.logger ?? createLogger(config);
+  const database = connect(config.DATABASE_URL);
+  const auth = createAuth(database.db, { secure: config.publicUrl.startsWith("https:"), sessionDays: config.SESSION_DAYS });
+  const ctx: AppContext = {
+    config,
+    database,
+    auth,
+    limiters: createLimiters(database.pool, new URL(config.DATABASE_URL).pathname.slice(1), options.limits ?? defaultLimits),
+    logger,
+    now: options.now ?? (() => new Date()),
+  };
+  await checkDurability(ctx);
+  if (options.migrate !== false) await migrateWithLock(ctx);
+  return ctx;
+}

@@ -1,0 +1,16 @@
+import type { Logger } from "pino";
+import type { Config } from "../config/index.ts";
+import type { Database } from "../db/client.ts";
+import type { Auth } from "../modules/auth/lucia.ts";
+import type { Limiters } from "../middleware/rate-limit.ts";
+
+/** Everything a request handler may need, built once at boot and handed to createApp(). */
+export interface AppContext {
+  config: Config;
+  database: Database;
+  auth: Auth;
+  limiters: Limiters;
+  logger: Logger;
+  /** The clock, injectable so tests can move time. */
+  now: () => Date;
+}

@@ -1,0 +1,65 @@
+import type { Pool as PromisePool } from "mysql2/promise";
+import { RateLimiterMySQL, RateLimiterRes } from "rate-limiter-flexible";
+import { tooMany } from "../lib/errors.ts";
+
+export interface LimitSpec {
+  points: number;
+  durationSeconds: number;
+}
+
+export interface LimitSettings {
+  signInPerAddress: LimitSpec;
+  signInPerAccount: LimitSpec;
+}
+
+export const defaultLimits: LimitSettings = {
+  signInPerAddress: { points: 30, durationSeconds: 15 * 60 },
+  signInPerAccount: { points: 8, durationSeconds: 15 * 60 },
+};
+
+export type Limiter = RateLimiterMySQL;
+export type Limiters = Record<keyof LimitSettings, Limiter>;
+
+/**
+ * Rate-limit counters live in MariaDB (the rate_limits table, created by the migrations), so every server
+ * instance counts against the same numbers.
+ */
+export function createLimiters(pool: PromisePool, database: string, settings: LimitSettings = defaultLimits): Limiters {
+  // rate-limiter-flexible speaks mysql2's callback API, which the promise pool wraps.
+  const storeClient = (pool as unknown as { pool: unknown }).pool;
+  const make = (keyPrefix: string, spec: LimitSpec) =>
+    new RateLimiterMySQL({
+      storeClient,
+      storeType: "pool",
+      dbName: database,
+      tableName: "rate_limits",
+      tableCreated: true,
+      keyPrefix,
+      points: spec.points,
+      duration: spec.durationSeconds,
+    });
+  return {
+    signInPerAddress: make("sign_in_ip", settings.signInPerAddress),
+    signInPerAccount: make("sign_in_account", settings.signInPerAccount),
+  };
+}
+
+const minutes = (ms: number) => Math.max(1, Math.ceil(ms / 60_000));
+
+/** Consumes one point, or throws a 429 whose message says how long to wait. */
+export async function consume(limiter: Limiter, key: string, what: string): Promise<void> {
+  try {
+    await limiter.consume(key);
+  } catch (e) {
+    if (e instanceof RateLimiterRes) {
+      const wait = minutes(e.msBeforeNext);
+      throw tooMany(`Too many ${what}. Wait ${wait} minute${wait === 1 ? "" : "s"} and try again.`, Math.ceil(e.msBeforeNext / 1000));
+    }
+    throw e;
+  }
+}
+
+export async function isBlocked(limiter: Limiter, key: string): Promise<RateLimiterRes | null> {
+  const res = await limiter.get(key);
+  return res && res.consumedPoints >= limiter.points ? res : null;
+}

@@ -1,0 +1,17 @@
+import { Router } from "express";
+import { sql } from "drizzle-orm";
+import type { AppContext } from "../../lib/context.ts";
+
+export function healthRoutes(ctx: AppContext): Router {
+  const router = Router();
+  router.get("/", async (_req, res) => {
+    res.setHeader("Cache-Control", "no-store");
+    try {
+      await ctx.database.db.execute(sql`select 1`);
+      res.json({ ok: true, db: "up" });
+    } catch {
+      res.status(503).json({ ok: false, db: "down" });
+    }
+  });
+  return router;
+}

@@ -1,0 +1,32 @@
+import { createBrowserRouter, type RouteObject } from "react-router";
+import { RouteError } from "./routes/route-error.tsx";
+import { Loading } from "../components/feedback/Notice.tsx";
+
+/** Each page is its own lazy module, so the public pages never download the staff area's code. */
+const page = (load: () => Promise<{ default: React.ComponentType }>): Pick<RouteObject, "lazy"> => ({
+  lazy: async () => ({ Component: (await load()).default }),
+});
+
+export const routes: RouteObject[] = [
+  {
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Loading />,
+    children: [
+      { path: "/", ...page(() => import("./routes/storefront.tsx")) },
+      { path: "/sign-in", ...page(() => import("./routes/sign-in.tsx")) },
+      {
+        path: "/app",
+        ...page(() => import("./layouts/StaffShell.tsx")),
+        children: [
+          { index: true, ...page(() => import("./routes/staff-overview.tsx")) },
+          { path: "users", ...page(() => import("./routes/users.tsx")) },
+          { path: "settings", ...page(() => import("./routes/settings.tsx")) },
+          { path: "*", ...page(() => import("./routes/not-found.tsx")) },
+        ],
+      },
+      { path: "*", ...page(() => import("./routes/not-found.tsx")) },
+    ],
+  },
+];
+
+export const router = createBrowserRouter(routes);

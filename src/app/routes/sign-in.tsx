@@ -1,0 +1,71 @@
+import { useState, type FormEvent } from "react";
+import { Navigate, useNavigate, useSearchParams } from "react-router";
+import { useSession, useSignIn } from "../../lib/auth.ts";
+import { isApiError } from "../../lib/api-client.ts";
+import { TextField } from "../../components/form/Field.tsx";
+import { Button } from "../../components/ui/Button.tsx";
+import { Notice } from "../../components/feedback/Notice.tsx";
+import { Wordmark } from "../../components/ui/Page.tsx";
+
+/** Only same-site paths under /app are followed after sign-in, never an outside address. */
+const safeNext = (next: string | null) => (next && next.startsWith("/app") && !next.startsWith("//") ? next : "/app");
+
+export default function SignIn() {
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const session = useSession();
+  const signIn = useSignIn();
+  const [email, setEmail] = useState("");
+  const [password, setPassword] = useState("");
+  const next = safeNext(params.get("next"));
+
+  if (session.data?.user) return <Navigate to={next} replace />;
+
+  const error = signIn.error;
+  const fields = isApiError(error) ? error.fields : {};
+
+  function submit(e: FormEvent) {
+    e.preventDefault();
+    signIn.mutate({ email, password }, { onSuccess: () => navigate(next, { replace: true }) });
+  }
+
+  return (
+    <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center px-5 py-10">
+      <Wordmark className="text-2xl" />
+      <h1 className="mt-8 text-3xl font-bold">Staff sign-in</h1>
+      <p className="mt-2 text-ink-soft">For the dealership's team. Buyers don't need an account.</p>
+      <form onSubmit={submit} noValidate className="mt-8 flex flex-col gap-5" aria-describedby={error ? "sign-in-error" : undefined}>
+        {error && !Object.keys(fields).length ? (
+          <div id="sign-in-error">
+            <Notice tone="danger" title={error.message} />
+          </div>
+        ) : null}
+        <TextField
+          label="E-mail"
+          type="email"
+          name="email"
+          autoComplete="username"
+          inputMode="email"
+          required
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={fields.email}
+        />
+        <TextField
+          label="Password"
+          type="password"
+          name="password"
+          autoComplete="current-password"
+          required
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={fields.password}
+        />
+        <Button type="submit" busy={signIn.isPending} className="mt-2 w-full">
+          Sign in
+        </Button>
+      </form>
+      <p className="mt-8 text-sm text-ink-soft">Forgotten your password? Ask an admin to set a new one for you.</p>
+    </main>
+  );
+}

@@ -1,0 +1,31 @@
+import { Link } from "react-router";
+import { useStaffUser } from "../RequireRole.tsx";
+import { navFor } from "../nav.ts";
+import { PageHeader, Panel } from "../../components/ui/Page.tsx";
+import { ROLE_LABELS } from "../../../shared/constants/roles.ts";
+
+export default function StaffOverview() {
+  const user = useStaffUser();
+  const first = user.name.split(" ")[0];
+  const places = navFor(user.role).filter((n) => n.to !== "/app");
+  return (
+    <>
+      <PageHeader title={`Hello, ${first}`} lead={`Signed in as ${ROLE_LABELS[user.role].label.toLowerCase()}. ${ROLE_LABELS[user.role].summary}`} />
+      <div className="grid gap-4 md:grid-cols-2">
+        {places.map((p) => (
+          <Panel key={p.to} title={<Link to={p.to}>{p.label}</Link>}>
+            <p className="text-ink-soft">{DESCRIPTIONS[p.to] ?? ""}</p>
+          </Panel>
+        ))}
+        <Panel title={<a href="/">Public site</a>}>
+          <p className="text-ink-soft">What buyers see: the dealership's live stock and each vehicle's condition page.</p>
+        </Panel>
+      </div>
+    </>
+  );
+}
+
+const DESCRIPTIONS: Record<string, string> = {
+  "/app/users": "Add staff, change roles, and deactivate accounts.",
+  "/app/settings": "Name, address, licence number, market rules and publishing rules.",
+};

@@ -1,0 +1,30 @@
+import { RequireRole, useStaffUser } from "../RequireRole.tsx";
+import { useUsers } from "../../features/users/api/users.ts";
+import { UsersTable } from "../../features/users/components/UsersTable.tsx";
+import { AddUserForm } from "../../features/users/components/AddUserForm.tsx";
+import { PageHeader, Panel } from "../../components/ui/Page.tsx";
+import { Loading, Notice } from "../../components/feedback/Notice.tsx";
+
+function UsersPage() {
+  const me = useStaffUser();
+  const users = useUsers();
+  return (
+    <>
+      <PageHeader title="Staff" lead="Who can sign in, and what each person's role lets them do. Deactivating someone signs them out at once." />
+      <div className="flex flex-col gap-8">
+        {users.isPending ? <Loading /> : users.isError ? <Notice tone="danger" title={users.error.message} /> : <UsersTable users={users.data.users} selfId={me.id} />}
+        <Panel title="Add a staff member">
+          <AddUserForm />
+        </Panel>
+      </div>
+    </>
+  );
+}
+
+export default function UsersRoute() {
+  return (
+    <RequireRole roles={["admin"]}>
+      <UsersPage />
+    </RequireRole>
+  );
+}

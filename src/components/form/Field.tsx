@@ -1,0 +1,84 @@
+import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from "react";
+
+interface FieldFrame {
+  label: ReactNode;
+  error?: string;
+  hint?: ReactNode;
+  after?: ReactNode;
+}
+
+const control =
+  "w-full rounded-md border bg-paper-raised px-3 py-2 text-base text-ink placeholder:text-ink-faint min-h-11 aria-[invalid=true]:border-brick aria-[invalid=true]:bg-brick-wash/40 border-line-strong focus:border-signal";
+
+function Frame({ id, label, error, hint, after, children }: FieldFrame & { id: string; children: ReactNode }) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="text-sm font-bold text-ink">
+        {label}
+      </label>
+      <div className="flex items-center gap-2">
+        {children}
+        {after}
+      </div>
+      {hint && !error ? (
+        <p id={`${id}-hint`} className="text-xs text-ink-soft">
+          {hint}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="text-sm font-bold text-brick" role="alert">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+const describedBy = (id: string, error?: string, hint?: ReactNode) =>
+  [error ? `${id}-error` : null, hint && !error ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
+
+export function TextField({ label, error, hint, after, className = "", ...rest }: FieldFrame & InputHTMLAttributes<HTMLInputElement>) {
+  const auto = useId();
+  const id = rest.id ?? auto;
+  return (
+    <Frame id={id} label={label} error={error} hint={hint} after={after}>
+      <input {...rest} id={id} aria-invalid={Boolean(error)} aria-describedby={describedBy(id, error, hint)} className={`${control} ${className}`} />
+    </Frame>
+  );
+}
+
+export function SelectField({ label, error, hint, children, className = "", ...rest }: FieldFrame & SelectHTMLAttributes<HTMLSelectElement>) {
+  const auto = useId();
+  const id = rest.id ?? auto;
+  return (
+    <Frame id={id} label={label} error={error} hint={hint}>
+      <select {...rest} id={id} aria-invalid={Boolean(error)} aria-describedby={describedBy(id, error, hint)} className={`${control} ${className}`}>
+        {children}
+      </select>
+    </Frame>
+  );
+}
+
+export function TextAreaField({ label, error, hint, className = "", ...rest }: FieldFrame & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+  const auto = useId();
+  const id = rest.id ?? auto;
+  return (
+    <Frame id={id} label={label} error={error} hint={hint}>
+      <textarea {...rest} id={id} aria-invalid={Boolean(error)} aria-describedby={describedBy(id, error, hint)} className={`${control} min-h-32 ${className}`} />
+    </Frame>
+  );
+}
+
+export function CheckboxField({ label, error, ...rest }: { label: ReactNode; error?: string } & InputHTMLAttributes<HTMLInputElement>) {
+  const auto = useId();
+  const id = rest.id ?? auto;
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="flex min-h-11 items-center gap-3 text-base">
+        <input {...rest} id={id} type="checkbox" className="size-5 accent-signal" aria-invalid={Boolean(error)} />
+        {label}
+      </label>
+      {error ? <p className="text-sm font-bold text-brick">{error}</p> : null}
+    </div>
+  );
+}

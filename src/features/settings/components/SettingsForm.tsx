@@ -1,0 +1,115 @@
+import { useState, type FormEvent } from "react";
+import { useUpdateDealership, type DealershipView } from "../api/dealership.ts";
+import { isApiError } from "../../../lib/api-client.ts";
+import { CheckboxField, SelectField, TextAreaField, TextField } from "../../../components/form/Field.tsx";
+import { Button } from "../../../components/ui/Button.tsx";
+import { Notice } from "../../../components/feedback/Notice.tsx";
+import { Panel } from "../../../components/ui/Page.tsx";
+import { MARKET_CODES, type MarketCode } from "../../../../shared/constants/market.ts";
+import { MARKET_PRESETS } from "../../../../shared/constants/market-presets.ts";
+
+type Form = Record<string, string | boolean>;
+
+const TEXT = ["name", "addressLine", "town", "region", "postcode", "licenceNumber", "phone", "email", "website", "currency", "disclaimerMarkdown", "market", "distanceUnit"] as const;
+const NUMBERS = ["legalMinTreadMm", "newTyreTreadMm", "serviceIntervalKm", "serviceIntervalMonths", "minPhotos"] as const;
+
+const toForm = (d: DealershipView): Form => ({
+  ...Object.fromEntries(TEXT.map((k) => [k, String(d[k] ?? "")])),
+  ...Object.fromEntries(NUMBERS.map((k) => [k, String(d[k])])),
+  vinCheckDigitMandatory: d.vinCheckDigitMandatory,
+});
+
+export function SettingsForm({ dealership }: { dealership: DealershipView }) {
+  const update = useUpdateDealership();
+  const [form, setForm] = useState<Form>(() => toForm(dealership));
+  const [saved, setSaved] = useState(false);
+  const fields = isApiError(update.error) ? update.error.fields : {};
+  const text = (k: string) => ({
+    name: k,
+    value: String(form[k] ?? ""),
+    onChange: (e: { target: { value: string } }) => setForm({ ...form, [k]: e.target.value }),
+    error: fields[k],
+  });
+
+  function applyMarket(code: MarketCode) {
+    const p = MARKET_PRESETS[code];
+    setForm({
+      ...form,
+      market: code,
+      distanceUnit: p.distanceUnit,
+      currency: p.currency,
+      legalMinTreadMm: String(p.legalMinTreadMm),
+      vinCheckDigitMandatory: p.vinCheckDigitMandatory,
+    });
+  }
+
+  function submit(e: FormEvent) {
+    e.preventDefault();
+    setSaved(false);
+    const body: Record<string, unknown> = { version: dealership.version };
+    for (const k of TEXT) body[k] = form[k];
+    for (const k of NUMBERS) body[k] = form[k] === "" ? null : Number(form[k]);
+    body.vinCheckDigitMandatory = form.vinCheckDigitMandatory;
+    update.mutate(body as never, {
+      onSuccess: ({ dealership: d }) => {
+        setForm(toForm(d));
+        setSaved(true);
+      },
+    });
+  }
+
+  const preset = MARKET_PRESETS[form.market as MarketCode];
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-6">
+      {saved ? <Notice tone="success" title="Settings saved" /> : null}
+      {update.error ? (
+        <Notice tone="danger" title={update.error.message}>
+          {update.error.status === 409 ? "Reload the page to see the newer settings; your edits are still in the form below." : null}
+        </Notice>
+      ) : null}
+      <Panel title="The dealership">
+        <div className="grid gap-4 sm:grid-cols-2">
+          <TextField label="Trading name" {...text("name")} />
+          <TextField label="Dealer licence number" {...text("licenceNumber")} hint="Shown on every public page." />
+          <TextField label="Street address" {...text("addressLine")} />
+          <TextField label="Town" {...text("town")} />
+          <TextField label="Region or state" {...text("region")} />
+          <TextField label="Postcode" {...text("postcode")} />
+          <TextField label="Phone" type="tel" {...text("phone")} />
+          <TextField label="E-mail for enquiries" type="email" {...text("email")} />
+          <TextField label="Website" type="url" {...text("website")} hint="Optional. Starts with https://" />
+        </div>
+      </Panel>
+      <Panel title="Market rules">
+        <div className="grid gap-4 sm:grid-cols-2">
+          <SelectField label="Market" name="market" value={String(form.market)} onChange={(e) => applyMarket(e.target.value as MarketCode)} error={fields.market} hint={preset ? `Tread minimum from ${preset.treadSource}.` : undefined}>
+            {MARKET_CODES.map((m) => (
+              <option key={m} value={m}>{MARKET_PRESETS[m].label}</option>
+            ))}
+          </SelectField>
+          <SelectField label="Distance unit" {...text("distanceUnit")}>
+            <option value="km">Kilometres</option>
+            <option value="mi">Miles</option>
+          </SelectField>
+          <TextField label="Currency (ISO 4217)" {...text("currency")} maxLength={3} className="font-mono uppercase" />
+          <TextField label="Legal minimum tread depth" inputMode="decimal" {...text("legalMinTreadMm")} after={<span className="unit">mm</span>} hint="Tyres below this fail the walk-around. Local law decides; check it." />
+          <TextField label="New-tyre tread depth" inputMode="decimal" {...text("newTyreTreadMm")} after={<span className="unit">mm</span>} hint="Used to show remaining tread as a percentage." />
+          <div className="self-end">
+            <CheckboxField label="A failed VIN check digit is an error (North American VINs)" checked={Boolean(form.vinCheckDigitMandatory)} onChange={(e) => setForm({ ...form, vinCheckDigitMandatory: e.target.checked })} />
+          </div>
+          <TextField label="Service interval (distance)" inputMode="numeric" {...text("serviceIntervalKm")} after={<span className="unit">km</span>} />
+          <TextField label="Service interval (time)" inputMode="numeric" {...text("serviceIntervalMonths")} after={<span className="unit">months</span>} />
+        </div>
+      </Panel>
+      <Panel title="Publishing">
+        <div className="grid gap-4">
+          <TextField label="Minimum photos before a vehicle may go live" inputMode="numeric" {...text("minPhotos")} className="max-w-32" />
+          <TextAreaField label="Disclaimer shown on every condition page (Markdown)" {...text("disclaimerMarkdown")} rows={5} />
+        </div>
+      </Panel>
+      <div>
+        <Button type="submit" busy={update.isPending}>Save settings</Button>
+      </div>
+    </form>
+  );
+}

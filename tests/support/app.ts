@@ -1,0 +1,58 @@
+import request from "supertest";
+import type { Express } from "express";
+import { pino } from "pino";
+import { createApp } from "../../server/app.ts";
+import { createContext } from "../../server/lib/boot.ts";
+import type { AppContext } from "../../server/lib/context.ts";
+import { seedDemo, DEMO_USERS } from "../../server/db/seed/demo.ts";
+import type { LimitSettings } from "../../server/middleware/rate-limit.ts";
+import type { Role } from "../../shared/constants/roles.ts";
+import { createTestDatabase } from "./database.ts";
+
+export const ORIGIN = "http://127.0.0.1:3000";
+export const DEMO_PASSWORD = "forthright-test-password";
+
+export interface TestApp {
+  app: Express;
+  ctx: AppContext;
+  /** A supertest agent that sends our Origin header, as a browser on our pages would. */
+  agent: () => ReturnType<typeof request.agent>;
+  signIn: (role: Role) => Promise<ReturnType<typeof request.agent>>;
+  close: () => Promise<void>;
+}
+
+const generous: LimitSettings = {
+  signInPerAddress: { points: 1000, durationSeconds: 900 },
+  signInPerAccount: { points: 1000, durationSeconds: 900 },
+};
+
+/** createApp() on its own database, seeded with the demo dealership and its four staff. */
+export async function startTestApp(options: { limits?: LimitSettings; seed?: boolean } = {}): Promise<TestApp> {
+  const database = createTestDatabase();
+  const ctx = await createContext({
+    env: { NODE_ENV: "test", DATABASE_URL: database.url, PUBLIC_URL: ORIGIN, LOG_LEVEL: "silent" },
+    logger: pino({ level: "silent" }),
+    limits: options.limits ?? generous,
+  });
+  if (options.seed !== false) await seedDemo(ctx.database.db, { password: DEMO_PASSWORD });
+  const app = createApp(ctx);
+  const agent = () => request.agent(app).set("Origin", ORIGIN);
+  return {
+    app,
+    ctx,
+    agent,
+    async signIn(role: Role) {
+      const a = agent();
+      const email = DEMO_USERS.find((u) => u.role === role)!.email;
+      const res = await a.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD });
+      if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
+      return a;
+    },
+    async close() {
+      await ctx.database.close();
+      database.drop();
+    },
+  };
+}
+
+export const ROLES_ALL: Role[] = ["admin", "sales", "workshop", "marketing"];

@@ -1,0 +1,34 @@
+import { defineConfig } from "vitest/config";
+import react from "@vitejs/plugin-react";
+import tailwindcss from "@tailwindcss/vite";
+import { fileURLToPath } from "node:url";
+
+const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
+
+const apiPort = Number(process.env.PORT ?? 3000);
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  root: here("./src"),
+  publicDir: false,
+  build: { outDir: here("./dist/client"), emptyOutDir: true, sourcemap: false },
+  server: {
+    host: "127.0.0.1",
+    port: 5173,
+    proxy: {
+      "/api": `http://127.0.0.1:${apiPort}`,
+      "/feeds": `http://127.0.0.1:${apiPort}`,
+      "/media": `http://127.0.0.1:${apiPort}`,
+    },
+  },
+  test: {
+    root: here("."),
+    environment: "node",
+    globalSetup: [here("./tests/support/global-setup.ts")],
+    include: ["tests/**/*.test.ts"],
+    testTimeout: 30_000,
+    hookTimeout: 120_000,
+    fileParallelism: true,
+    maxWorkers: 2,
+  },
+});
