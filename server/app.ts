@@ -10,6 +10,7 @@ import { healthRoutes } from "./modules/health/health.routes.ts";
 import { authRoutes } from "./modules/auth/auth.routes.ts";
 import { usersRoutes } from "./modules/users/users.routes.ts";
 import { dealershipRoutes, publicDealershipRoutes } from "./modules/dealerships/dealerships.routes.ts";
+import { vehiclesRoutes } from "./modules/vehicles/vehicles.routes.ts";
 import { clientRoutes } from "./modules/client/client.routes.ts";
 
 /** Builds the whole HTTP application without listening, so tests drive it directly. */
@@ -68,6 +69,7 @@ export function createApp(ctx: AppContext): Express {
   api.use("/auth", authRoutes(ctx));
   api.use("/users", usersRoutes(ctx));
   api.use("/dealership", dealershipRoutes(ctx));
+  api.use("/vehicles", vehiclesRoutes(ctx));
   api.use("/public/dealership", publicDealershipRoutes(ctx));
   api.use(apiNotFound);
   app.use("/api", api);

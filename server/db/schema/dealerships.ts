@@ -28,6 +28,8 @@ export const dealerships = mysqlTable("dealerships", {
   serviceIntervalKm: int().notNull().default(15000),
   serviceIntervalMonths: int().notNull().default(12),
   minPhotos: int().notNull().default(6),
+  // The last stock number issued; the next vehicle takes this plus one, under a row lock.
+  lastStockNumber: int().notNull().default(10000),
   disclaimerMarkdown: text().notNull(),
   version: version(),
   createdAt: createdAt(),

@@ -3,3 +3,5 @@ export * from "./users.ts";
 export * from "./sessions.ts";
 export * from "./audit-log.ts";
 export * from "./rate-limits.ts";
+export * from "./vehicles.ts";
+export * from "./vehicle-events.ts";

@@ -1,0 +1,192 @@
+import { eq, sql } from "drizzle-orm";
+import type { User } from "lucia";
+import type { AppContext } from "../../lib/context.ts";
+import type { DbOrTx } from "../../db/client.ts";
+import { dealerships, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
+import { AppError, badRequest, conflict, forbidden, notFound, staleVersion } from "../../lib/errors.ts";
+import { dayIn } from "../../lib/clock.ts";
+import { auditFor, diffFields, recordAudit } from "../audit/audit.service.ts";
+import { getDealership } from "../dealerships/dealerships.service.ts";
+import { computeDerived, type Derived } from "../../../shared/domain/derived.ts";
+import { vinCheck } from "../../../shared/domain/vin.ts";
+import { milesToKm } from "../../../shared/domain/units.ts";
+import { checkStatusMove } from "../../../shared/domain/status.ts";
+import { forbiddenFields } from "../../../shared/constants/vehicle-fields.ts";
+import type { CreateVehicleInput, StatusMoveInput, UpdateVehicleInput, VehicleListQuery } from "../../../shared/schemas/vehicles.ts";
+import { eventsFor, featureSuggestions, findVehicle, listVehicles, makesInStock } from "./vehicles.queries.ts";
+import { presentVehicle, presentVehicleRow } from "./vehicles.presenter.ts";
+
+const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
+
+/** The dealership's calendar day now: the clock every derived figure is computed against. */
+export const todayFor = (ctx: AppContext, d: Pick<Dealership, "timeZone">) => dayIn(d.timeZone, ctx.now());
+
+type Stored = Omit<typeof vehicles.$inferInsert, "id" | "dealershipId" | "stockNumber" | "stockedAt" | "derived">;
+
+/** Maps validated input to columns. The odometer keeps the unit it was read in; a km figure is kept beside it for sorting. */
+function toColumns(input: Partial<CreateVehicleInput>, defaultUnit: "km" | "mi"): Partial<Stored> {
+  const { odometerKm, odometerReading, odometerUnit, ...rest } = input;
+  // make and model are never null here: both schemas refuse an empty make or model.
+  const out = { ...rest } as Partial<Stored>;
+  if (odometerKm !== undefined) {
+    out.odometerReading = odometerKm;
+    out.odometerUnit = "km";
+  } else if (odometerReading !== undefined) {
+    out.odometerReading = odometerReading;
+    out.odometerUnit = odometerUnit ?? defaultUnit;
+  } else if (odometerUnit !== undefined) {
+    out.odometerUnit = odometerUnit;
+  }
+  return out;
+}
+
+const odometerKmOf = (reading: number | null | undefined, unit: "km" | "mi") =>
+  reading == null ? null : unit === "mi" ? milesToKm(reading) : reading;
+
+export function deriveFor(v: Pick<Vehicle, keyof Stored> & { odometerKmIndex?: number | null }, d: Dealership, today: string): Derived {
+  return computeDerived(
+    {
+      vin: v.vin,
+      buildYear: v.buildYear,
+      firstRegistrationDate: v.firstRegistrationDate,
+      odometerKm: odometerKmOf(v.odometerReading, v.odometerUnit ?? "km"),
+      fuelType: v.fuelType,
+      powerKw: v.powerKw,
+      torqueNm: v.torqueNm,
+      fuelTankLitres: v.fuelTankLitres,
+      fuelConsumptionL100km: v.fuelConsumptionL100km,
+      consumptionTestCycle: v.consumptionTestCycle,
+      batteryKwh: v.batteryKwh,
+      energyKwh100km: v.energyKwh100km,
+      kerbWeightKg: v.kerbWeightKg,
+      serviceHistory: v.serviceHistory,
+    },
+    { today, checkDigitMandatory: d.vinCheckDigitMandatory, serviceIntervalKm: d.serviceIntervalKm, serviceIntervalMonths: d.serviceIntervalMonths },
+  );
+}
+
+/** Where the market makes the check digit mandatory, a wrong one is refused; elsewhere it is only a warning. */
+function enforceVin(vin: string | null | undefined, d: Dealership) {
+  if (!vin) return;
+  const check = vinCheck(vin, { checkDigitMandatory: d.vinCheckDigitMandatory });
+  const blocking = check.issues.filter((i) => i.severity === "error");
+  if (blocking.length) throw badRequest("The VIN does not pass its checks.", { vin: blocking.map((i) => i.message).join(" ") });
+}
+
+async function nextStockNumber(tx: DbOrTx, dealershipId: number): Promise<string> {
+  await tx.update(dealerships).set({ lastStockNumber: sql`${dealerships.lastStockNumber} + 1` }).where(eq(dealerships.id, dealershipId));
+  const [row] = await tx.select({ n: dealerships.lastStockNumber }).from(dealerships).where(eq(dealerships.id, dealershipId));
+  return String(row!.n);
+}
+
+export async function list(ctx: AppContext, actor: User, query: VehicleListQuery) {
+  const { rows, total, page, pageSize } = await listVehicles(ctx.database.db, actor.dealershipId, query);
+  const now = ctx.now();
+  return { vehicles: rows.map((r) => presentVehicleRow(r, now)), total, page, pageSize, pageCount: Math.max(1, Math.ceil(total / pageSize)) };
+}
+
+export async function get(ctx: AppContext, actor: User, id: number) {
+  const { db } = ctx.database;
+  const v = await findVehicle(db, actor.dealershipId, id);
+  if (!v) throw notFound("That vehicle");
+  const d = await getDealership(db, actor.dealershipId);
+  // Recomputed on read as well: "overdue" depends on today, not on the day of the last save.
+  return presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now());
+}
+
+export async function history(ctx: AppContext, actor: User, id: number) {
+  const { db } = ctx.database;
+  const v = await findVehicle(db, actor.dealershipId, id);
+  if (!v) throw notFound("That vehicle");
+  const [events, audit] = await Promise.all([eventsFor(db, id), auditFor(db, actor.dealershipId, "vehicle", String(id))]);
+  return {
+    statusHistory: events.map((e) => ({ from: e.fromStatus, to: e.toStatus, note: e.note, by: e.userName, at: e.at.toISOString() })),
+    audit: audit.map((a) => ({ action: a.action, by: a.userEmail, at: a.at.toISOString(), before: a.before, after: a.after })),
+  };
+}
+
+export async function create(ctx: AppContext, actor: User, input: CreateVehicleInput) {
+  return ctx.database.db.transaction(async (tx) => {
+    const d = await getDealership(tx, actor.dealershipId, true);
+    enforceVin(input.vin, d);
+    const columns = toColumns(input, d.distanceUnit);
+    const stockNumber = await nextStockNumber(tx, d.id);
+    const base = {
+      odometerUnit: d.distanceUnit,
+      features: [],
+      serviceHistory: [],
+      ...columns,
+      make: input.make!,
+      model: input.model!,
+    } as Stored & { make: string; model: string };
+    const derived = deriveFor(base as never, d, todayFor(ctx, d));
+    const [result] = await tx.insert(vehicles).values({
+      ...base,
+      dealershipId: d.id,
+      stockNumber,
+      odometerKmIndex: odometerKmOf(base.odometerReading, base.odometerUnit ?? "km"),
+      derived,
+      stockedAt: ctx.now(),
+    });
+    const id = result.insertId;
+    await tx.insert(vehicleEvents).values({ vehicleId: id, fromStatus: null, toStatus: "intake", note: "Taken into stock", userId: actor.id, userName: actor.name });
+    await recordAudit(tx, actorOf(actor), { action: "vehicle_created", entityType: "vehicle", entityId: id, after: { stockNumber, ...columns } });
+    const row = (await findVehicle(tx, d.id, id))!;
+    return presentVehicle(row, derived, ctx.now());
+  });
+}
+
+export async function update(ctx: AppContext, actor: User, id: number, input: UpdateVehicleInput) {
+  const { version, ...changes } = input;
+  const fields = Object.keys(changes);
+  const refused = forbiddenFields(actor.role, fields);
+  if (refused.length) {
+    throw new AppError(403, "forbidden_fields", `Your role cannot change: ${refused.join(", ")}.`, Object.fromEntries(refused.map((f) => [f, "Your role cannot change this field."])));
+  }
+  return ctx.database.db.transaction(async (tx) => {
+    const current = await findVehicle(tx, actor.dealershipId, id, true);
+    if (!current) throw notFound("That vehicle");
+    const d = await getDealership(tx, actor.dealershipId);
+    const today = todayFor(ctx, d);
+    if (current.version !== version) throw staleVersion(presentVehicle(current, deriveFor(current, d, today), ctx.now()));
+    if ("vin" in changes) enforceVin(changes.vin, d);
+    const columns = toColumns(changes, current.odometerUnit);
+    const next = { ...current, ...columns };
+    const derived = deriveFor(next, d, today);
+    await tx
+      .update(vehicles)
+      .set({ ...columns, odometerKmIndex: odometerKmOf(next.odometerReading, next.odometerUnit), derived, version: current.version + 1 })
+      .where(eq(vehicles.id, id));
+    const diff = diffFields(current as unknown as Record<string, unknown>, columns as Record<string, unknown>);
+    if (diff) await recordAudit(tx, actorOf(actor), { action: "vehicle_updated", entityType: "vehicle", entityId: id, ...diff });
+    const row = (await findVehicle(tx, d.id, id))!;
+    return presentVehicle(row, derived, ctx.now());
+  });
+}
+
+export async function moveStatus(ctx: AppContext, actor: User, id: number, input: StatusMoveInput) {
+  return ctx.database.db.transaction(async (tx) => {
+    const current = await findVehicle(tx, actor.dealershipId, id, true);
+    if (!current) throw notFound("That vehicle");
+    const d = await getDealership(tx, actor.dealershipId);
+    if (current.version !== input.version) throw staleVersion(presentVehicle(current, deriveFor(current, d, todayFor(ctx, d)), ctx.now()));
+    const verdict = checkStatusMove(current.status, input.to, actor.role);
+    if (!verdict.ok) {
+      if (verdict.code === "role") throw forbidden(verdict.reason);
+      throw conflict(verdict.reason, { from: current.status, to: input.to }, "illegal_move");
+    }
+    await tx.update(vehicles).set({ status: input.to, version: current.version + 1 }).where(eq(vehicles.id, id));
+    await tx.insert(vehicleEvents).values({ vehicleId: id, fromStatus: current.status, toStatus: input.to, note: input.note ?? "", userId: actor.id, userName: actor.name });
+    await recordAudit(tx, actorOf(actor), { action: "status_moved", entityType: "vehicle", entityId: id, before: { status: current.status }, after: { status: input.to, note: input.note ?? null } });
+    const row = (await findVehicle(tx, d.id, id))!;
+    return presentVehicle(row, deriveFor(row, d, todayFor(ctx, d)), ctx.now());
+  });
+}
+
+export async function suggestions(ctx: AppContext, actor: User, prefix: string) {
+  const [features, makes] = await Promise.all([
+    featureSuggestions(ctx.database.db, actor.dealershipId, prefix),
+    makesInStock(ctx.database.db, actor.dealershipId),
+  ]);
+  return { features, makes: makes.map((m) => m.make) };
+}
