@@ -2,15 +2,9 @@ import type { RequestHandler } from "express";
 import type { z } from "zod";
 import { badRequest } from "../lib/errors.ts";
 
-/** Maps every zod issue to the API's `fields` object: one message per field path, all fields at once. */
-export function zodFields(error: z.ZodError): Record<string, string> {
-  const fields: Record<string, string> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.length ? issue.path.join(".") : "_";
-    if (!(key in fields)) fields[key] = issue.message;
-  }
-  return fields;
-}
+import { zodFields } from "../../shared/schemas/fields.ts";
+
+export { zodFields };
 
 export function parseOr400<S extends z.ZodType>(schema: S, value: unknown, what = "request"): z.infer<S> {
   const result = schema.safeParse(value);

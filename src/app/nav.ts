@@ -12,6 +12,7 @@ const everyone = ["admin", "sales", "workshop", "marketing"] as const;
 /** The staff navigation. The server enforces every permission; this only hides what a role cannot use. */
 export const NAV: NavItem[] = [
   { to: "/app", label: "Overview", roles: everyone, end: true },
+  { to: "/app/vehicles", label: "Stock", roles: everyone },
   { to: "/app/users", label: "Staff", roles: ["admin"] },
   { to: "/app/settings", label: "Dealership", roles: ["admin"] },
 ];

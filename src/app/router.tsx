@@ -19,6 +19,9 @@ export const routes: RouteObject[] = [
         ...page(() => import("./layouts/StaffShell.tsx")),
         children: [
           { index: true, ...page(() => import("./routes/staff-overview.tsx")) },
+          { path: "vehicles", ...page(() => import("./routes/vehicles.tsx")) },
+          { path: "vehicles/new", ...page(() => import("./routes/vehicle-new.tsx")) },
+          { path: "vehicles/:id", ...page(() => import("./routes/vehicle-detail.tsx")) },
           { path: "users", ...page(() => import("./routes/users.tsx")) },
           { path: "settings", ...page(() => import("./routes/settings.tsx")) },
           { path: "*", ...page(() => import("./routes/not-found.tsx")) },

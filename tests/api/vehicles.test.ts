@@ -253,13 +253,13 @@ describe("GET /api/vehicles", () => {
 
   it("when filtered, sorted and paged, then pages do not overlap and follow the sort", async () => {
     const a = await t.signIn("sales");
-    for (const p of [1_000_000, 2_000_000, 3_000_000]) await a.post("/api/vehicles").send(dieselSuv({ make: "Pellam", model: "Yardhand", priceCents: p, fuelType: "diesel" }));
-    const first = await a.get("/api/vehicles").query({ make: "Pellam", sort: "price_desc", pageSize: 2, page: 1 });
-    const second = await a.get("/api/vehicles").query({ make: "Pellam", sort: "price_desc", pageSize: 2, page: 2 });
+    for (const p of [1_000_000, 2_000_000, 3_000_000]) await a.post("/api/vehicles").send(dieselSuv({ make: "Orrin", model: "Fallow", priceCents: p, fuelType: "diesel" }));
+    const first = await a.get("/api/vehicles").query({ make: "Orrin", sort: "price_desc", pageSize: 2, page: 1 });
+    const second = await a.get("/api/vehicles").query({ make: "Orrin", sort: "price_desc", pageSize: 2, page: 2 });
     expect(first.body.total).toBe(3);
     expect(first.body.vehicles.map((v: { priceCents: number }) => v.priceCents)).toEqual([3_000_000, 2_000_000]);
     expect(second.body.vehicles.map((v: { priceCents: number }) => v.priceCents)).toEqual([1_000_000]);
-    const ranged = await a.get("/api/vehicles").query({ make: "Pellam", priceMin: 1_500_000, priceMax: 2_500_000, status: "intake,preparing", fuelType: "diesel" });
+    const ranged = await a.get("/api/vehicles").query({ make: "Orrin", priceMin: 1_500_000, priceMax: 2_500_000, status: "intake,preparing", fuelType: "diesel" });
     expect(ranged.body.vehicles).toHaveLength(1);
   });
 
@@ -280,7 +280,7 @@ describe("GET /api/vehicles", () => {
     const a = await t.signIn("sales");
     const res = await a.get("/api/vehicles/suggestions").query({ q: "He" });
     expect(res.body.features).toContain("Heated seats");
-    expect(res.body.makes).toContain("Corvane");
+    expect(res.body.makes).toContain("Ambrel");
   });
 });
 

@@ -25,10 +25,10 @@ afterAll(async () => {
 });
 
 const expectedNav = {
-  admin: ["Overview", "Staff", "Dealership"],
-  sales: ["Overview"],
-  workshop: ["Overview"],
-  marketing: ["Overview"],
+  admin: ["Overview", "Stock", "Staff", "Dealership"],
+  sales: ["Overview", "Stock"],
+  workshop: ["Overview", "Stock"],
+  marketing: ["Overview", "Stock"],
 } as const;
 
 describe("signing in as each role in Chromium", () => {

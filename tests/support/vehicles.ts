@@ -1,7 +1,7 @@
 /** Factories for vehicle inputs: the invented demo makes, realistic figures. */
 export const dieselSuv = (over: Record<string, unknown> = {}) => ({
-  make: "Corvane",
-  model: "Ridgeback",
+  make: "Ambrel",
+  model: "Loam",
   variant: "2.2 diesel seven-seat",
   buildYear: 2019,
   bodyType: "suv",

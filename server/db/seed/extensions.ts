@@ -1,4 +1,7 @@
 import type { Db } from "../client.ts";
+import { seedDemoVehicles } from "./vehicles.ts";
 
-/** Later capabilities (vehicles, photos, walk-arounds) add their demo records here. */
-export async function seedDemoExtensions(_db: Db, _dealershipId: number): Promise<void> {}
+/** Capabilities beyond the foundation add their demo records here, in dependency order. */
+export async function seedDemoExtensions(db: Db, dealershipId: number): Promise<void> {
+  await seedDemoVehicles(db, dealershipId);
+}

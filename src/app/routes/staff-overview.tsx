@@ -26,6 +26,7 @@ export default function StaffOverview() {
 }
 
 const DESCRIPTIONS: Record<string, string> = {
+  "/app/vehicles": "Every vehicle on the books: search, filter, open a record, move it along.",
   "/app/users": "Add staff, change roles, and deactivate accounts.",
   "/app/settings": "Name, address, licence number, market rules and publishing rules.",
 };
