@@ -11,6 +11,10 @@ import { authRoutes } from "./modules/auth/auth.routes.ts";
 import { usersRoutes } from "./modules/users/users.routes.ts";
 import { dealershipRoutes, publicDealershipRoutes } from "./modules/dealerships/dealerships.routes.ts";
 import { vehiclesRoutes } from "./modules/vehicles/vehicles.routes.ts";
+import { photosRoutes } from "./modules/photos/photos.routes.ts";
+import { walkaroundRoutes } from "./modules/walkaround/walkaround.routes.ts";
+import { checksRoutes } from "./modules/checks/checks.routes.ts";
+import { mediaRoutes } from "./modules/photos/media.routes.ts";
 import { clientRoutes } from "./modules/client/client.routes.ts";
 
 /** Builds the whole HTTP application without listening, so tests drive it directly. */
@@ -69,11 +73,14 @@ export function createApp(ctx: AppContext): Express {
   api.use("/auth", authRoutes(ctx));
   api.use("/users", usersRoutes(ctx));
   api.use("/dealership", dealershipRoutes(ctx));
+  api.use("/vehicles/:id/photos", photosRoutes(ctx));
+  api.use("/vehicles/:id", walkaroundRoutes(ctx), checksRoutes(ctx));
   api.use("/vehicles", vehiclesRoutes(ctx));
   api.use("/public/dealership", publicDealershipRoutes(ctx));
   api.use(apiNotFound);
   app.use("/api", api);
 
+  app.use(mediaRoutes(ctx));
   app.use(clientRoutes(ctx));
   app.use(errorHandler);
   return app;

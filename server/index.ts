@@ -1,6 +1,7 @@
 import { createServer } from "node:http";
 import { createApp } from "./app.ts";
 import { createContext } from "./lib/boot.ts";
+import { removeOrphans } from "./modules/photos/cleanup.ts";
 
 /** Process entry: config, database, listen, and a graceful shutdown that lets requests in flight finish. */
 export async function main() {
@@ -10,6 +11,13 @@ export async function main() {
   server.keepAliveTimeout = 65_000;
   await new Promise<void>((resolve) => server.listen(ctx.config.PORT, ctx.config.HOST, resolve));
   ctx.logger.info({ url: ctx.config.publicUrl }, "Forthright is listening");
+  ctx.photoWorker.start();
+  const cleanup = () =>
+    removeOrphans(ctx.database, ctx.storage, ctx.uploadsDir)
+      .then((removed) => removed.length && ctx.logger.info({ removed: removed.length }, "removed orphaned files"))
+      .catch((err) => ctx.logger.error({ err }, "orphan clean-up failed"));
+  void cleanup();
+  setInterval(cleanup, 60 * 60 * 1000).unref();
 
   let stopping = false;
   const stop = (signal: string) => {
@@ -19,6 +27,7 @@ export async function main() {
     const force = setTimeout(() => process.exit(1), 10_000);
     force.unref();
     server.close(async () => {
+      await ctx.photoWorker.stop().catch(() => undefined);
       await ctx.database.close().catch(() => undefined);
       process.exit(0);
     });

@@ -6,6 +6,9 @@ import { applyMigrations } from "../db/migrate.ts";
 import { createAuth } from "../modules/auth/lucia.ts";
 import { createLimiters, defaultLimits, type LimitSettings } from "../middleware/rate-limit.ts";
 import type { AppContext } from "./context.ts";
+import path from "node:path";
+import { localStorage } from "./storage.ts";
+import { PhotoWorker } from "../modules/photos/photo-worker.ts";
 
 export function createLogger(config: Config): Logger {
   return pino({ level: config.LOG_LEVEL, redact: ["req.headers.cookie", "req.headers.authorization"] });
@@ -39,12 +42,15 @@ export interface BootOptions {
   logger?: Logger;
   now?: () => Date;
   migrate?: boolean;
+  uploadsDir?: string;
 }
 
 export async function createContext(options: BootOptions = {}): Promise<AppContext> {
   const config = { ...loadConfig(options.env), ...options.config } as Config;
   const logger = options.logger ?? createLogger(config);
   const database = connect(config.DATABASE_URL);
+  const uploadsDir = path.resolve(options.uploadsDir ?? config.UPLOADS_DIR);
+  const storage = localStorage(uploadsDir);
   const auth = createAuth(database.db, { secure: config.publicUrl.startsWith("https:"), sessionDays: config.SESSION_DAYS });
   const ctx: AppContext = {
     config,
@@ -52,6 +58,9 @@ export async function createContext(options: BootOptions = {}): Promise<AppConte
     auth,
     limiters: createLimiters(database.pool, new URL(config.DATABASE_URL).pathname.slice(1), options.limits ?? defaultLimits),
     logger,
+    storage,
+    uploadsDir,
+    photoWorker: new PhotoWorker(database, storage, logger),
     now: options.now ?? (() => new Date()),
   };
   await checkDurability(ctx);

@@ -1,4 +1,7 @@
 import request from "supertest";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
 import type { Express } from "express";
 import { pino } from "pino";
 import { createApp } from "../../server/app.ts";
@@ -29,7 +32,9 @@ const generous: LimitSettings = {
 /** createApp() on its own database, seeded with the demo dealership and its four staff. */
 export async function startTestApp(options: { limits?: LimitSettings; seed?: boolean } = {}): Promise<TestApp> {
   const database = createTestDatabase();
+  const uploadsDir = mkdtempSync(path.join(tmpdir(), "forthright-test-uploads-"));
   const ctx = await createContext({
+    uploadsDir,
     env: { NODE_ENV: "test", DATABASE_URL: database.url, PUBLIC_URL: ORIGIN, LOG_LEVEL: "silent" },
     logger: pino({ level: "silent" }),
     limits: options.limits ?? generous,
@@ -49,7 +54,9 @@ export async function startTestApp(options: { limits?: LimitSettings; seed?: boo
       return a;
     },
     async close() {
+      await ctx.photoWorker.stop();
       await ctx.database.close();
+      rmSync(uploadsDir, { recursive: true, force: true });
       database.drop();
     },
   };

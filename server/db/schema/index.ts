@@ -5,3 +5,8 @@ export * from "./audit-log.ts";
 export * from "./rate-limits.ts";
 export * from "./vehicles.ts";
 export * from "./vehicle-events.ts";
+export * from "./photos.ts";
+export * from "./defects.ts";
+export * from "./walkaround.ts";
+export * from "./tyres.ts";
+export * from "./checks.ts";

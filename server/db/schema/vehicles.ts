@@ -56,6 +56,11 @@ export const vehicles = mysqlTable(
     /** The derived block as computed at the last save, for lists and feeds. */
     derived: jsonText<Derived>().notNull(),
     stockedAt: datetime({ mode: "date", fsp: 3 }).notNull(),
+    /** Versions of the evidence sets, apart from the record's own, so the workshop and sales do not collide. */
+    tyresVersion: int().notNull().default(0),
+    checksVersion: int().notNull().default(0),
+    /** The last defect number issued for this vehicle. */
+    lastDefectNumber: int().notNull().default(0),
     version: version(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),

@@ -4,8 +4,12 @@ import type { AppContext } from "../../lib/context.ts";
 import type { DbOrTx } from "../../db/client.ts";
 import { dealerships, type Dealership } from "../../db/schema/index.ts";
 import { notFound, staleVersion } from "../../lib/errors.ts";
+import { dayIn } from "../../lib/clock.ts";
 import { diffFields, recordAudit } from "../audit/audit.service.ts";
 import type { DealershipSettingsInput, PublicDealership } from "../../../shared/schemas/dealership.ts";
+
+/** The dealership's calendar day now: the clock every derived figure is computed against. */
+export const todayFor = (ctx: AppContext, d: Pick<Dealership, "timeZone">) => dayIn(d.timeZone, ctx.now());
 
 export async function getDealership(db: DbOrTx, id: number, forUpdate = false): Promise<Dealership> {
   const q = db.select().from(dealerships).where(eq(dealerships.id, id)).limit(1);

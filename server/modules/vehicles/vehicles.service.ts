@@ -4,22 +4,21 @@ import type { AppContext } from "../../lib/context.ts";
 import type { DbOrTx } from "../../db/client.ts";
 import { dealerships, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
 import { AppError, badRequest, conflict, forbidden, notFound, staleVersion } from "../../lib/errors.ts";
-import { dayIn } from "../../lib/clock.ts";
 import { auditFor, diffFields, recordAudit } from "../audit/audit.service.ts";
-import { getDealership } from "../dealerships/dealerships.service.ts";
+import { getDealership, todayFor } from "../dealerships/dealerships.service.ts";
 import { computeDerived, type Derived } from "../../../shared/domain/derived.ts";
 import { vinCheck } from "../../../shared/domain/vin.ts";
 import { milesToKm } from "../../../shared/domain/units.ts";
 import { checkStatusMove } from "../../../shared/domain/status.ts";
 import { forbiddenFields } from "../../../shared/constants/vehicle-fields.ts";
 import type { CreateVehicleInput, StatusMoveInput, UpdateVehicleInput, VehicleListQuery } from "../../../shared/schemas/vehicles.ts";
+import { evidenceOf } from "../condition/condition.service.ts";
 import { eventsFor, featureSuggestions, findVehicle, listVehicles, makesInStock } from "./vehicles.queries.ts";
 import { presentVehicle, presentVehicleRow } from "./vehicles.presenter.ts";
 
 const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
 
-/** The dealership's calendar day now: the clock every derived figure is computed against. */
-export const todayFor = (ctx: AppContext, d: Pick<Dealership, "timeZone">) => dayIn(d.timeZone, ctx.now());
+export { todayFor };
 
 type Stored = Omit<typeof vehicles.$inferInsert, "id" | "dealershipId" | "stockNumber" | "stockedAt" | "derived">;
 
@@ -91,7 +90,7 @@ export async function get(ctx: AppContext, actor: User, id: number) {
   if (!v) throw notFound("That vehicle");
   const d = await getDealership(db, actor.dealershipId);
   // Recomputed on read as well: "overdue" depends on today, not on the day of the last save.
-  return presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now());
+  return { ...presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now()), evidence: await evidenceOf(db, d, v) };
 }
 
 export async function history(ctx: AppContext, actor: User, id: number) {

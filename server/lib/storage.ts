@@ -1,0 +1,79 @@
+import { createReadStream } from "node:fs";
+import { mkdir, readdir, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
+import { randomBytes } from "node:crypto";
+import path from "node:path";
+import type { Readable } from "node:stream";
+
+/**
+ * Where uploaded files live. Keys are server-generated ("photos/ab/<sha256>-640.webp"), never user-supplied paths.
+ * The local folder is the default; an S3-compatible store can implement the same interface for several instances.
+ */
+export interface Storage {
+  put(key: string, data: Buffer): Promise<void>;
+  read(key: string): Promise<Buffer>;
+  stream(key: string): Readable;
+  exists(key: string): Promise<boolean>;
+  delete(key: string): Promise<void>;
+  /** Every stored key with its age, for the orphan clean-up. Unfinished writes are listed with `partial`. */
+  list(): AsyncIterable<{ key: string; modifiedAt: Date; partial: boolean }>;
+}
+
+export const KEY_PATTERN = /^(photos|closeups)\/[a-f0-9]{2}\/[a-f0-9]{64}(-[a-z0-9]+)?\.(jpg|webp|avif)$/;
+
+export function assertKey(key: string): void {
+  if (!KEY_PATTERN.test(key)) throw new Error(`refusing an unexpected storage key: ${key}`);
+}
+
+export function localStorage(root: string): Storage {
+  const dir = path.resolve(root);
+  const full = (key: string) => {
+    assertKey(key);
+    return path.join(dir, key);
+  };
+  return {
+    async put(key, data) {
+      const target = full(key);
+      await mkdir(path.dirname(target), { recursive: true });
+      // Write beside, then rename: a crash leaves a .partial file (cleaned up later), never a half file under the key.
+      const tmp = `${target}.${randomBytes(6).toString("hex")}.partial`;
+      await writeFile(tmp, data, { flag: "wx" });
+      await rename(tmp, target);
+    },
+    read: (key) => readFile(full(key)),
+    stream: (key) => createReadStream(full(key)),
+    async exists(key) {
+      try {
+        await stat(full(key));
+        return true;
+      } catch {
+        return false;
+      }
+    },
+    async delete(key) {
+      await rm(full(key), { force: true });
+    },
+    async *list() {
+      for (const top of ["photos", "closeups"]) {
+        let shards: string[] = [];
+        try {
+          shards = await readdir(path.join(dir, top));
+        } catch {
+          continue;
+        }
+        for (const shard of shards) {
+          const names = await readdir(path.join(dir, top, shard)).catch(() => [] as string[]);
+          for (const name of names) {
+            const s = await stat(path.join(dir, top, shard, name)).catch(() => null);
+            if (s?.isFile()) yield { key: `${top}/${shard}/${name}`, modifiedAt: s.mtime, partial: name.endsWith(".partial") };
+          }
+        }
+      }
+    },
+  };
+}
+
+/** Deletes a possibly partial file by its listed key (which may not match KEY_PATTERN). */
+export async function removeListed(root: string, key: string): Promise<void> {
+  if (key.includes("..") || path.isAbsolute(key)) return;
+  await rm(path.join(path.resolve(root), key), { force: true });
+}

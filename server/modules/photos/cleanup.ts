@@ -1,0 +1,39 @@
+import { isNotNull } from "drizzle-orm";
+import type { Database } from "../../db/client.ts";
+import { defects, photos } from "../../db/schema/index.ts";
+import { removeListed, type Storage } from "../../lib/storage.ts";
+
+/** Other modules (published revisions) register the keys they still need. */
+export type KeySource = (database: Database) => Promise<Iterable<string>>;
+const sources: KeySource[] = [];
+export const registerKeySource = (source: KeySource) => void sources.push(source);
+
+async function referencedKeys(database: Database): Promise<Set<string>> {
+  const keys = new Set<string>();
+  for (const p of await database.db.select({ masterKey: photos.masterKey, variants: photos.variants }).from(photos)) {
+    keys.add(p.masterKey);
+    for (const v of p.variants) keys.add(v.key);
+  }
+  for (const d of await database.db.select({ key: defects.closeupKey }).from(defects).where(isNotNull(defects.closeupKey))) keys.add(d.key!);
+  for (const source of sources) for (const k of await source(database)) keys.add(k);
+  return keys;
+}
+
+/**
+ * Removes files no row refers to and unfinished writes, once they are older than the grace period (an upload in
+ * flight writes its file a moment before its row). Returns what it removed.
+ */
+export async function removeOrphans(database: Database, storage: Storage, root: string, options: { graceMs?: number; now?: Date } = {}) {
+  const grace = options.graceMs ?? 60 * 60 * 1000;
+  const cutoff = (options.now ?? new Date()).getTime() - grace;
+  const keys = await referencedKeys(database);
+  const removed: string[] = [];
+  for await (const file of storage.list()) {
+    if (file.modifiedAt.getTime() > cutoff) continue;
+    if (file.partial || !keys.has(file.key)) {
+      await removeListed(root, file.key);
+      removed.push(file.key);
+    }
+  }
+  return removed;
+}

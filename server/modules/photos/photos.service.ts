@@ -1,0 +1,136 @@
+import { and, eq, inArray, ne } from "drizzle-orm";
+import type { User } from "lucia";
+import type { AppContext } from "../../lib/context.ts";
+import { defects, photos, vehicles } from "../../db/schema/index.ts";
+import { AppError, conflict, notFound, staleVersion } from "../../lib/errors.ts";
+import { recordAudit } from "../audit/audit.service.ts";
+import { PHOTO_LIMITS } from "../../../shared/constants/evidence.ts";
+import { findVehicle } from "../vehicles/vehicles.queries.ts";
+import { prepareMaster } from "./photo-pipeline.ts";
+import { findPhoto, photoCount, photosOf } from "./photos.queries.ts";
+import { presentPhoto } from "./photos.presenter.ts";
+
+const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
+
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+}
+
+export interface Refusal {
+  name: string;
+  status: number;
+  code: string;
+  reason: string;
+}
+
+async function requireVehicle(ctx: AppContext, actor: User, vehicleId: number) {
+  const v = await findVehicle(ctx.database.db, actor.dealershipId, vehicleId);
+  if (!v) throw notFound("That vehicle");
+  return v;
+}
+
+export async function list(ctx: AppContext, actor: User, vehicleId: number) {
+  await requireVehicle(ctx, actor, vehicleId);
+  return (await photosOf(ctx.database.db, vehicleId)).map(presentPhoto);
+}
+
+/**
+ * Stores each file that sharp can decode and refuses the rest one by one, so a bad file never costs the good ones.
+ * The master is written before its row; a row therefore never points at a missing file.
+ */
+export async function upload(ctx: AppContext, actor: User, vehicleId: number, files: UploadedFile[]) {
+  await requireVehicle(ctx, actor, vehicleId);
+  const accepted: ReturnType<typeof presentPhoto>[] = [];
+  const refused: Refusal[] = [];
+  for (const file of files) {
+    let master;
+    try {
+      master = await prepareMaster(file.buffer);
+    } catch (err) {
+      if (err instanceof AppError) {
+        refused.push({ name: file.originalname, status: err.status, code: err.code, reason: err.message });
+        continue;
+      }
+      throw err;
+    }
+    await ctx.storage.put(master.key, master.buffer);
+    const row = await ctx.database.db.transaction(async (tx) => {
+      // The vehicle row lock serialises uploads to one vehicle, so the count limit and positions hold.
+      await tx.select({ id: vehicles.id }).from(vehicles).where(eq(vehicles.id, vehicleId)).for("update");
+      const { count, lastPosition } = await photoCount(tx, vehicleId);
+      if (count >= PHOTO_LIMITS.maxPhotosPerVehicle) return null;
+      const [res] = await tx.insert(photos).values({
+        vehicleId,
+        position: lastPosition + 1,
+        isCover: count === 0,
+        hash: master.hash,
+        masterKey: master.key,
+        width: master.width,
+        height: master.height,
+        placeholder: master.placeholder,
+        variants: [],
+        uploadedBy: actor.id,
+      });
+      await recordAudit(tx, actorOf(actor), { action: "photo_added", entityType: "vehicle", entityId: vehicleId, after: { photoId: res.insertId, name: file.originalname.slice(0, 120) } });
+      return (await findPhoto(tx, vehicleId, res.insertId))!;
+    });
+    if (!row) {
+      refused.push({ name: file.originalname, status: 409, code: "too_many_photos", reason: `This vehicle already has ${PHOTO_LIMITS.maxPhotosPerVehicle} photos, the most allowed. Delete some first.` });
+      continue;
+    }
+    accepted.push(presentPhoto(row));
+  }
+  if (accepted.length) ctx.photoWorker.kick();
+  return { accepted, refused };
+}
+
+export async function update(ctx: AppContext, actor: User, vehicleId: number, photoId: number, input: { version: number; caption?: string; zone?: string | null; isCover?: true }) {
+  await requireVehicle(ctx, actor, vehicleId);
+  return ctx.database.db.transaction(async (tx) => {
+    const current = await findPhoto(tx, vehicleId, photoId, true);
+    if (!current) throw notFound("That photo");
+    if (current.version !== input.version) throw staleVersion(presentPhoto(current));
+    if (input.isCover) await tx.update(photos).set({ isCover: false }).where(and(eq(photos.vehicleId, vehicleId), ne(photos.id, photoId)));
+    const set = {
+      ...(input.caption !== undefined ? { caption: input.caption } : {}),
+      ...(input.zone !== undefined ? { zone: input.zone as never } : {}),
+      ...(input.isCover ? { isCover: true } : {}),
+    };
+    await tx.update(photos).set({ ...set, version: current.version + 1 }).where(eq(photos.id, photoId));
+    await recordAudit(tx, actorOf(actor), { action: "photo_updated", entityType: "vehicle", entityId: vehicleId, before: { photoId, caption: current.caption, zone: current.zone, isCover: current.isCover }, after: { photoId, ...set } });
+    return presentPhoto((await findPhoto(tx, vehicleId, photoId))!);
+  });
+}
+
+export async function reorder(ctx: AppContext, actor: User, vehicleId: number, order: number[]) {
+  await requireVehicle(ctx, actor, vehicleId);
+  return ctx.database.db.transaction(async (tx) => {
+    await tx.select({ id: vehicles.id }).from(vehicles).where(eq(vehicles.id, vehicleId)).for("update");
+    const current = await photosOf(tx, vehicleId);
+    const ids = current.map((p) => p.id).sort((a, b) => a - b);
+    if (JSON.stringify([...order].sort((a, b) => a - b)) !== JSON.stringify(ids)) {
+      throw conflict("The photo list changed while you were reordering. Reload and try again.", { current: current.map(presentPhoto) }, "stale_order");
+    }
+    for (const [i, id] of order.entries()) await tx.update(photos).set({ position: i + 1 }).where(eq(photos.id, id));
+    await recordAudit(tx, actorOf(actor), { action: "photos_reordered", entityType: "vehicle", entityId: vehicleId, before: { order: current.map((p) => p.id) }, after: { order } });
+    return (await photosOf(tx, vehicleId)).map(presentPhoto);
+  });
+}
+
+/** Deletes the row first; its files go with the next clean-up once nothing refers to them. Pins on it are cleared. */
+export async function remove(ctx: AppContext, actor: User, vehicleId: number, photoId: number, version: number) {
+  await requireVehicle(ctx, actor, vehicleId);
+  await ctx.database.db.transaction(async (tx) => {
+    const current = await findPhoto(tx, vehicleId, photoId, true);
+    if (!current) throw notFound("That photo");
+    if (current.version !== version) throw staleVersion(presentPhoto(current));
+    await tx.update(defects).set({ photoId: null, pinX: null, pinY: null, closeupKey: null }).where(eq(defects.photoId, photoId));
+    await tx.delete(photos).where(eq(photos.id, photoId));
+    if (current.isCover) {
+      const [next] = await photosOf(tx, vehicleId);
+      if (next) await tx.update(photos).set({ isCover: true }).where(inArray(photos.id, [next.id]));
+    }
+    await recordAudit(tx, actorOf(actor), { action: "photo_deleted", entityType: "vehicle", entityId: vehicleId, before: { photoId, caption: current.caption }, after: null });
+  });
+}

@@ -1,0 +1,115 @@
+import { and, asc, eq, sql } from "drizzle-orm";
+import type { User } from "lucia";
+import type { AppContext } from "../../lib/context.ts";
+import type { DbOrTx } from "../../db/client.ts";
+import { defects, vehicles, zoneMarks, type Defect } from "../../db/schema/index.ts";
+import { badRequest, conflict, notFound, staleVersion } from "../../lib/errors.ts";
+import { diffFields, recordAudit } from "../audit/audit.service.ts";
+import { ZONES, type Zone } from "../../../shared/constants/evidence.ts";
+import type { CreateDefectInput, UpdateDefectInput } from "../../../shared/schemas/evidence.ts";
+import { findVehicle } from "../vehicles/vehicles.queries.ts";
+import { findPhoto } from "../photos/photos.queries.ts";
+import { makeCloseup } from "../photos/photo-pipeline.ts";
+import { presentDefect } from "./walkaround.presenter.ts";
+
+const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
+
+export const defectsOf = (db: DbOrTx, vehicleId: number) => db.select().from(defects).where(eq(defects.vehicleId, vehicleId)).orderBy(asc(defects.number));
+export const marksOf = (db: DbOrTx, vehicleId: number) => db.select().from(zoneMarks).where(eq(zoneMarks.vehicleId, vehicleId));
+
+/** Each zone: checked with nothing found, checked with defects, or still to check. */
+export function zoneStates(defectRows: Pick<Defect, "zone">[], marks: Array<{ zone: Zone; checkedBy: string | null; checkedAt: Date }>) {
+  return ZONES.map((zone) => {
+    const count = defectRows.filter((d) => d.zone === zone).length;
+    const mark = marks.find((m) => m.zone === zone);
+    return {
+      zone,
+      state: count > 0 ? ("defects" as const) : mark ? ("nothing_found" as const) : ("unchecked" as const),
+      defects: count,
+      checkedBy: mark?.checkedBy ?? null,
+      checkedAt: mark?.checkedAt.toISOString() ?? null,
+    };
+  });
+}
+
+async function lockVehicle(ctx: AppContext, tx: DbOrTx, actor: User, vehicleId: number) {
+  const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
+  if (!v) throw notFound("That vehicle");
+  return v;
+}
+
+/** Validates a pin against the vehicle's photos and cuts the close-up; null clears it. */
+async function pinColumns(ctx: AppContext, tx: DbOrTx, vehicleId: number, pin: CreateDefectInput["pin"]) {
+  if (pin === undefined) return {};
+  if (pin === null) return { photoId: null, pinX: null, pinY: null, closeupKey: null };
+  const photo = await findPhoto(tx, vehicleId, pin.photoId);
+  if (!photo) throw badRequest("The pin must be on one of this vehicle's photos.", { "pin.photoId": "That photo is not on this vehicle." });
+  const master = await ctx.storage.read(photo.masterKey);
+  const closeupKey = await makeCloseup(ctx.storage, master, photo.width, photo.height, pin.x, pin.y);
+  return { photoId: photo.id, pinX: pin.x, pinY: pin.y, closeupKey };
+}
+
+export async function walkaround(ctx: AppContext, actor: User, vehicleId: number) {
+  const { db } = ctx.database;
+  if (!(await findVehicle(db, actor.dealershipId, vehicleId))) throw notFound("That vehicle");
+  const [rows, marks] = await Promise.all([defectsOf(db, vehicleId), marksOf(db, vehicleId)]);
+  return { defects: rows.map(presentDefect), zones: zoneStates(rows, marks) };
+}
+
+export async function createDefect(ctx: AppContext, actor: User, vehicleId: number, input: CreateDefectInput) {
+  return ctx.database.db.transaction(async (tx) => {
+    const v = await lockVehicle(ctx, tx, actor, vehicleId);
+    const pin = await pinColumns(ctx, tx, vehicleId, input.pin);
+    const number = v.lastDefectNumber + 1;
+    await tx.update(vehicles).set({ lastDefectNumber: number }).where(eq(vehicles.id, vehicleId));
+    const { pin: _pin, ...fields } = input;
+    const [res] = await tx.insert(defects).values({ ...fields, ...pin, vehicleId, number, recordedBy: actor.id });
+    // A defect in a zone marked "nothing found" replaces the mark: the zone is now checked with defects.
+    await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, input.zone)));
+    await recordAudit(tx, actorOf(actor), { action: "defect_added", entityType: "vehicle", entityId: vehicleId, after: { number, ...fields, pinned: Boolean(input.pin) } });
+    const [row] = await tx.select().from(defects).where(eq(defects.id, res.insertId));
+    return presentDefect(row!);
+  });
+}
+
+export async function updateDefect(ctx: AppContext, actor: User, vehicleId: number, defectId: number, input: UpdateDefectInput) {
+  return ctx.database.db.transaction(async (tx) => {
+    await lockVehicle(ctx, tx, actor, vehicleId);
+    const [current] = await tx.select().from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.id, defectId))).for("update");
+    if (!current) throw notFound("That defect");
+    if (current.version !== input.version) throw staleVersion(presentDefect(current));
+    const { version, pin, ...fields } = input;
+    const pinCols = await pinColumns(ctx, tx, vehicleId, pin);
+    await tx.update(defects).set({ ...fields, ...pinCols, version: version + 1 }).where(eq(defects.id, defectId));
+    if (fields.zone) await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, fields.zone)));
+    const diff = diffFields(current as unknown as Record<string, unknown>, { ...fields, ...pinCols } as Record<string, unknown>);
+    if (diff) await recordAudit(tx, actorOf(actor), { action: "defect_updated", entityType: "vehicle", entityId: vehicleId, before: { number: current.number, ...diff.before }, after: { number: current.number, ...diff.after } });
+    const [row] = await tx.select().from(defects).where(eq(defects.id, defectId));
+    return presentDefect(row!);
+  });
+}
+
+export async function deleteDefect(ctx: AppContext, actor: User, vehicleId: number, defectId: number, version: number) {
+  await ctx.database.db.transaction(async (tx) => {
+    await lockVehicle(ctx, tx, actor, vehicleId);
+    const [current] = await tx.select().from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.id, defectId))).for("update");
+    if (!current) throw notFound("That defect");
+    if (current.version !== version) throw staleVersion(presentDefect(current));
+    await tx.delete(defects).where(eq(defects.id, defectId));
+    await recordAudit(tx, actorOf(actor), { action: "defect_removed", entityType: "vehicle", entityId: vehicleId, before: presentDefect(current), after: null });
+  });
+}
+
+/** Marks a zone "checked, nothing found", or clears the mark. A zone with defects cannot be marked clear. */
+export async function markZone(ctx: AppContext, actor: User, vehicleId: number, zone: Zone, nothingFound: boolean) {
+  return ctx.database.db.transaction(async (tx) => {
+    await lockVehicle(ctx, tx, actor, vehicleId);
+    const [{ n }] = (await tx.select({ n: sql<number>`count(*)` }).from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.zone, zone)))) as [{ n: number }];
+    if (nothingFound && Number(n) > 0) throw conflict("This zone has defects recorded, so it cannot be marked as nothing found.", undefined, "zone_has_defects");
+    await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, zone)));
+    if (nothingFound) await tx.insert(zoneMarks).values({ vehicleId, zone, checkedBy: actor.name, checkedAt: ctx.now() });
+    await recordAudit(tx, actorOf(actor), { action: nothingFound ? "zone_checked_clear" : "zone_unchecked", entityType: "vehicle", entityId: vehicleId, after: { zone } });
+    const [rows, marks] = await Promise.all([defectsOf(tx, vehicleId), marksOf(tx, vehicleId)]);
+    return zoneStates(rows, marks);
+  });
+}
