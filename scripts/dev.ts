@@ -1,12 +1,14 @@
 /** `npm run dev`: database up, the API restarting on change (tsx watch), and Vite's dev server with the API proxied. */
 import { spawn } from "node:child_process";
+import path from "node:path";
 import { ensureLocalDatabase } from "./local-db.ts";
+import { localStorage } from "../server/lib/storage.ts";
 import { connect } from "../server/db/connect-and-migrate.ts";
 import { seedDemoIfEmpty } from "../server/db/seed/demo.ts";
 
 await ensureLocalDatabase();
 const database = await connect(process.env.DATABASE_URL!);
-await seedDemoIfEmpty(database.db, { password: process.env.DEMO_PASSWORD ?? "forthright-demo" });
+await seedDemoIfEmpty(database.db, { password: process.env.DEMO_PASSWORD ?? "forthright-demo", storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) });
 await database.close();
 
 const port = process.env.PORT ?? "3000";

@@ -1,5 +1,7 @@
 /** `npm run seed` seeds the demo when the database is empty; `npm run seed -- --reset` rebuilds it. */
+import path from "node:path";
 import { ensureLocalDatabase } from "./local-db.ts";
+import { localStorage } from "../server/lib/storage.ts";
 import { connect } from "../server/db/connect-and-migrate.ts";
 import { resetDemo, seedDemoIfEmpty } from "../server/db/seed/demo.ts";
 
@@ -12,10 +14,10 @@ const database = await connect(process.env.DATABASE_URL!);
 const password = process.env.DEMO_PASSWORD ?? "forthright-demo";
 try {
   if (process.argv.includes("--reset")) {
-    await resetDemo(database.db, { password });
+    await resetDemo(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) });
     console.log("Rebuilt the demo dealership.");
   } else {
-    console.log((await seedDemoIfEmpty(database.db, { password })) ? "Seeded the demo dealership." : "Demo data already present.");
+    console.log((await seedDemoIfEmpty(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) })) ? "Seeded the demo dealership." : "Demo data already present.");
   }
 } finally {
   await database.close();

@@ -3,7 +3,9 @@
  * then the server on http://127.0.0.1:3000.
  */
 import { build } from "vite";
+import path from "node:path";
 import { ensureLocalDatabase } from "./local-db.ts";
+import { localStorage } from "../server/lib/storage.ts";
 import { connect } from "../server/db/connect-and-migrate.ts";
 import { seedDemoIfEmpty, DEMO_USERS } from "../server/db/seed/demo.ts";
 import { main } from "../server/index.ts";
@@ -15,7 +17,7 @@ const password = process.env.DEMO_PASSWORD ?? "forthright-demo";
   const database = await connect(process.env.DATABASE_URL!);
   try {
     if (!production) {
-      const seeded = await seedDemoIfEmpty(database.db, { password });
+      const seeded = await seedDemoIfEmpty(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) });
       console.log(seeded ? "Seeded the demo dealership." : "Demo data already present; keeping it.");
     }
   } finally {

@@ -21,7 +21,16 @@ export const routes: RouteObject[] = [
           { index: true, ...page(() => import("./routes/staff-overview.tsx")) },
           { path: "vehicles", ...page(() => import("./routes/vehicles.tsx")) },
           { path: "vehicles/new", ...page(() => import("./routes/vehicle-new.tsx")) },
-          { path: "vehicles/:id", ...page(() => import("./routes/vehicle-detail.tsx")) },
+          {
+            path: "vehicles/:id",
+            ...page(() => import("./layouts/VehicleLayout.tsx")),
+            children: [
+              { index: true, ...page(() => import("./routes/vehicle-detail.tsx")) },
+              { path: "photos", ...page(() => import("./routes/vehicle-photos.tsx")) },
+              { path: "walkaround", ...page(() => import("./routes/vehicle-walkaround.tsx")) },
+              { path: "checks", ...page(() => import("./routes/vehicle-checks.tsx")) },
+            ],
+          },
           { path: "users", ...page(() => import("./routes/users.tsx")) },
           { path: "settings", ...page(() => import("./routes/settings.tsx")) },
           { path: "*", ...page(() => import("./routes/not-found.tsx")) },

@@ -25,8 +25,18 @@ export function launchBrowser(): Promise<Browser> {
 
 export const RESULTS_DIR = path.resolve("test-results/screenshots");
 
+/** Waits (briefly) for every image on the page to finish, so screenshots show what a person would see. */
+export async function imagesSettled(page: Page) {
+  await page
+    .waitForFunction(() => [...document.images].every((i) => i.loading === "lazy" || (i.complete && i.naturalWidth > 0)), undefined, { timeout: 5000 })
+    .catch(() => undefined);
+  // Loaded is not painted: wait for each visible image to be decoded too.
+  await page.evaluate(() => Promise.all([...document.images].filter((i) => i.loading !== "lazy").map((i) => i.decode().catch(() => undefined)))).catch(() => undefined);
+}
+
 export async function screenshot(page: Page, name: string) {
   mkdirSync(RESULTS_DIR, { recursive: true });
+  await imagesSettled(page);
   await page.screenshot({ path: path.join(RESULTS_DIR, `${name}.png`), fullPage: true });
 }
 

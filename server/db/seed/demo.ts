@@ -9,6 +9,7 @@ import { dealerships, users } from "../schema/index.ts";
 import { hashPassword } from "../../modules/auth/password.ts";
 import type { Role } from "../../../shared/constants/roles.ts";
 import { seedDemoExtensions } from "./extensions.ts";
+import type { Storage } from "../../lib/storage.ts";
 
 export const DEMO_DEALERSHIP = {
   slug: "fernhollow-motors",
@@ -45,14 +46,20 @@ export const DEMO_USERS: Array<{ email: string; name: string; role: Role }> = [
   { email: "marketing@demo.test", name: "Mika Arlow", role: "marketing" },
 ];
 
-export async function seedDemoIfEmpty(db: Db, options: { password: string }): Promise<boolean> {
+export interface SeedOptions {
+  password: string;
+  /** Where demo photos are stored; without it the demo has no photos or walk-around evidence. */
+  storage?: Storage;
+}
+
+export async function seedDemoIfEmpty(db: Db, options: SeedOptions): Promise<boolean> {
   const [row] = await db.select({ n: sql<number>`count(*)` }).from(dealerships);
   if (Number(row?.n) > 0) return false;
   await seedDemo(db, options);
   return true;
 }
 
-export async function seedDemo(db: Db, options: { password: string }): Promise<void> {
+export async function seedDemo(db: Db, options: SeedOptions): Promise<void> {
   const passwordHash = await hashPassword(options.password);
   const dealershipId = await db.transaction(async (tx) => {
     const [result] = await tx.insert(dealerships).values({ ...DEMO_DEALERSHIP });
@@ -62,11 +69,11 @@ export async function seedDemo(db: Db, options: { password: string }): Promise<v
     );
     return id;
   });
-  await seedDemoExtensions(db, dealershipId);
+  await seedDemoExtensions(db, dealershipId, options);
 }
 
 /** Empties every table (the migration journal excepted) and seeds the demo again. */
-export async function resetDemo(db: Db, options: { password: string }): Promise<void> {
+export async function resetDemo(db: Db, options: SeedOptions): Promise<void> {
   const [tables] = (await db.execute(
     sql`select table_name as name from information_schema.tables where table_schema = database() and table_type = 'BASE TABLE'`,
   )) as unknown as [Array<{ name: string }>];

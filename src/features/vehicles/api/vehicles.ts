@@ -1,9 +1,12 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { get, patch, post } from "../../../lib/api-client.ts";
 import type { StatusMoveInput, VehicleListQuery } from "../../../../shared/schemas/vehicles.ts";
-import type { VehicleRow, VehicleView } from "../../../../server/modules/vehicles/vehicles.presenter.ts";
+import type { VehicleRow, VehicleView as VehicleRecord } from "../../../../server/modules/vehicles/vehicles.presenter.ts";
+import type { Evidence } from "../../../../server/modules/condition/condition.service.ts";
 
-export type { VehicleRow, VehicleView };
+/** The record as a write returns it; the detail read adds the evidence. */
+export type { VehicleRow, VehicleRecord, Evidence };
+export type VehicleView = VehicleRecord & { evidence: Evidence };
 
 export interface VehicleList {
   vehicles: VehicleRow[];
@@ -61,20 +64,27 @@ export const useVehicleList = (filters: VehicleListQuery) => useQuery(vehicleLis
 export const useVehicle = (id: number) => useQuery(vehicleQueryOptions(id));
 export const useVehicleHistory = (id: number) => useQuery(vehicleHistoryQueryOptions(id));
 
-function useVehicleWrite<I>(fn: (input: I) => Promise<{ vehicle: VehicleView }>) {
+function useVehicleWrite<I>(fn: (input: I) => Promise<{ vehicle: VehicleRecord }>) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: fn,
     onSuccess: ({ vehicle }) => {
-      qc.setQueryData(vehicleKeys.detail(vehicle.id), { vehicle });
+      // Keep the evidence already loaded; the record part is the server's new answer.
+      qc.setQueryData<{ vehicle: VehicleView }>(vehicleKeys.detail(vehicle.id), (old) => (old ? { vehicle: { ...old.vehicle, ...vehicle } } : old));
       qc.invalidateQueries({ queryKey: vehicleKeys.lists() });
       qc.invalidateQueries({ queryKey: vehicleKeys.history(vehicle.id) });
     },
   });
 }
 
-export const useCreateVehicle = () => useVehicleWrite((input: Record<string, unknown>) => post<{ vehicle: VehicleView }>("/api/vehicles", input));
+export const useCreateVehicle = () => useVehicleWrite((input: Record<string, unknown>) => post<{ vehicle: VehicleRecord }>("/api/vehicles", input));
 export const useUpdateVehicle = (id: number) =>
-  useVehicleWrite((input: Record<string, unknown>) => patch<{ vehicle: VehicleView }>(`/api/vehicles/${id}`, input));
+  useVehicleWrite((input: Record<string, unknown>) => patch<{ vehicle: VehicleRecord }>(`/api/vehicles/${id}`, input));
 export const useMoveStatus = (id: number) =>
-  useVehicleWrite((input: StatusMoveInput) => post<{ vehicle: VehicleView }>(`/api/vehicles/${id}/status`, input));
+  useVehicleWrite((input: StatusMoveInput) => post<{ vehicle: VehicleRecord }>(`/api/vehicles/${id}/status`, input));
+
+/** After any evidence write: the detail (evidence, condition index) and lists are re-read. */
+export function useInvalidateVehicle() {
+  const qc = useQueryClient();
+  return (id: number) => Promise.all([qc.invalidateQueries({ queryKey: vehicleKeys.detail(id) }), qc.invalidateQueries({ queryKey: vehicleKeys.lists() })]);
+}

@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { movesFrom } from "../../../../shared/domain/status.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
-import { useMoveStatus, type VehicleView } from "../api/vehicles.ts";
+import { useMoveStatus, type VehicleRecord as VehicleView } from "../api/vehicles.ts";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 
 /** The moves this role can make from the vehicle's status. Publishing has its own checks and screen. */

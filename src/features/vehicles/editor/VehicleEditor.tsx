@@ -6,7 +6,7 @@ import { canEditGroup, fieldGroup } from "../../../../shared/constants/vehicle-f
 import type { Role } from "../../../../shared/constants/roles.ts";
 import { zodFields } from "../../../../shared/schemas/fields.ts";
 import { isApiError } from "../../../lib/api-client.ts";
-import { useCreateVehicle, useUpdateVehicle, type VehicleView } from "../api/vehicles.ts";
+import { useCreateVehicle, useUpdateVehicle, type VehicleRecord as VehicleView } from "../api/vehicles.ts";
 import type { DealershipView } from "../../settings/api/dealership.ts";
 import { FIELDS, SECTIONS, type FieldDef } from "./fields.ts";
 import { changedFields, emptyForm, formFromVehicle, formToInput, liveNumber, type VehicleForm } from "./form-model.ts";

@@ -1,4 +1,4 @@
-import type { VehicleView } from "../api/vehicles.ts";
+import type { VehicleRecord as VehicleView } from "../api/vehicles.ts";
 import { FIELDS } from "./fields.ts";
 
 export interface ServiceRow {

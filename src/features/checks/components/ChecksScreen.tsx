@@ -1,0 +1,379 @@
+import { useEffect, useMemo, useRef, useState, type FormEvent } from "react";
+import { CHECK_ITEMS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "../../../../shared/constants/evidence.ts";
+import { NOT_A_CERTIFICATE } from "../../../../shared/domain/cautions.ts";
+import { formatTreadDepth } from "../../../../shared/domain/display.ts";
+import type { Role } from "../../../../shared/constants/roles.ts";
+import { isApiError } from "../../../lib/api-client.ts";
+import type { VehicleView } from "../../vehicles/api/vehicles.ts";
+import type { DealershipView } from "../../settings/api/dealership.ts";
+import { useReloadChecks, useSaveChecks, useSaveTyres, type ChecksView } from "../api/checks.ts";
+import {
+  checkErrorKeys, checksDirty, checksFormFrom, liveCautions, todayIn, tyreErrorKeys, tyresDirty, tyresFormFrom, validateChecks, validateTyres,
+  type CheckForm, type ChecksForm, type FieldErrors, type TyreField, type TyresForm,
+} from "../form-model.ts";
+import { Button } from "../../../components/ui/Button.tsx";
+import { Notice } from "../../../components/feedback/Notice.tsx";
+import { CautionsPanel } from "./CautionsPanel.tsx";
+import { CheckRow } from "./CheckRow.tsx";
+import { TyreCard } from "./TyreCard.tsx";
+import { Measure } from "./inputs.tsx";
+
+/** Who records condition evidence (server/modules/checks/checks.routes.ts WRITERS); marketing reads it. */
+const EDITORS: readonly Role[] = ["admin", "sales", "workshop"];
+const ROAD: readonly TyrePosition[] = TYRE_POSITIONS.filter((p) => p !== "spare");
+
+interface Props {
+  vehicle: VehicleView;
+  dealership: DealershipView;
+  role: Role;
+}
+
+const messageOf = (e: unknown) => (e instanceof Error ? e.message : "Something went wrong; nothing you typed has been lost.");
+
+/** Tyres and checks, phone first: what is typed stays in the form until it is saved or the person chooses theirs. */
+export function ChecksScreen({ vehicle, dealership, role }: Props) {
+  const canEdit = EDITORS.includes(role);
+  const today = todayIn(dealership.timeZone);
+  const rules = useMemo(() => ({ legalMinTreadMm: dealership.legalMinTreadMm, newTyreTreadMm: dealership.newTyreTreadMm }), [dealership.legalMinTreadMm, dealership.newTyreTreadMm]);
+  const locale = dealership.locale;
+  const ev = vehicle.evidence;
+
+  // What was last saved (the base), and what is typed.
+  const [tyresBase, setTyresBase] = useState(ev.tyres);
+  const [checksBase, setChecksBase] = useState(ev.checks);
+  const tyresBaseForm = useMemo(() => tyresFormFrom(tyresBase, today), [tyresBase, today]);
+  const checksBaseForm = useMemo(() => checksFormFrom(checksBase), [checksBase]);
+  const [tyres, setTyres] = useState<TyresForm>(() => tyresFormFrom(ev.tyres, today));
+  const [checks, setChecks] = useState<ChecksForm>(() => checksFormFrom(ev.checks));
+  const tyresNow = useRef(tyres);
+  const checksNow = useRef(checks);
+  tyresNow.current = tyres;
+  checksNow.current = checks;
+
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [conflict, setConflict] = useState({ tyres: false, checks: false });
+  const [problem, setProblem] = useState<string | null>(null);
+  const [note, setNote] = useState<string | null>(null);
+  const noticesRef = useRef<HTMLDivElement>(null);
+
+  const saveTyres = useSaveTyres(vehicle.id);
+  const saveChecks = useSaveChecks(vehicle.id);
+  const reload = useReloadChecks(vehicle.id);
+  const busy = saveTyres.isPending || saveChecks.isPending;
+
+  const tDirty = tyresDirty(tyres, tyresBaseForm);
+  const cDirty = checksDirty(checks, checksBaseForm);
+  const dirty = tDirty || cDirty;
+  const live = useMemo(() => liveCautions(tyres, checks, rules), [tyres, checks, rules]);
+
+  // A newer saved version (someone else, read on window focus) replaces the form only while nothing is typed in it.
+  useEffect(() => {
+    if (ev.tyres.version > tyresBase.version && !tDirty && !conflict.tyres) {
+      setTyresBase(ev.tyres);
+      setTyres(tyresFormFrom(ev.tyres, today));
+    }
+  }, [ev.tyres]); // eslint-disable-line react-hooks/exhaustive-deps
+  useEffect(() => {
+    if (ev.checks.version > checksBase.version && !cDirty && !conflict.checks) {
+      setChecksBase(ev.checks);
+      setChecks(checksFormFrom(ev.checks));
+    }
+  }, [ev.checks]); // eslint-disable-line react-hooks/exhaustive-deps
+
+  useEffect(() => {
+    const warn = (e: BeforeUnloadEvent) => {
+      if (dirty) e.preventDefault();
+    };
+    window.addEventListener("beforeunload", warn);
+    return () => window.removeEventListener("beforeunload", warn);
+  }, [dirty]);
+
+  function touched() {
+    setNote(null);
+  }
+  function setTyre(position: TyrePosition, field: TyreField, value: string) {
+    touched();
+    setTyres((f) => ({ ...f, tyres: { ...f.tyres, [position]: { ...f.tyres[position], [field]: value } } }));
+  }
+  function setCheck(item: CheckItem, value: CheckForm) {
+    touched();
+    setChecks((f) => ({ ...f, [item]: value }));
+  }
+
+  const showNotices = () => requestAnimationFrame(() => noticesRef.current?.scrollIntoView({ block: "start", behavior: "smooth" }));
+  const showFirstError = () =>
+    requestAnimationFrame(() => {
+      const el = document.querySelector<HTMLElement>('form[aria-label="Tyres and checks"] [aria-invalid="true"]');
+      el?.scrollIntoView({ block: "center" });
+      el?.focus({ preventScroll: true });
+    });
+
+  /** Keeps the form as it is when the person typed on while the save was on its way. */
+  function adoptTyres(data: ChecksView, sent: TyresForm, day: string) {
+    setTyresBase(data.tyres);
+    if (tyresNow.current === sent) setTyres(tyresFormFrom(data.tyres, day));
+  }
+  function adoptChecks(data: ChecksView, sent: ChecksForm) {
+    setChecksBase(data.checks);
+    if (checksNow.current === sent) setChecks(checksFormFrom(data.checks));
+  }
+
+  async function save(e: FormEvent) {
+    e.preventDefault();
+    if (!canEdit || busy || !dirty) return;
+    setProblem(null);
+    setNote(null);
+    const day = todayIn(dealership.timeZone);
+    const sentTyres = tyres;
+    const sentChecks = checks;
+    // The same schemas the server uses, so mistakes show before anything is sent.
+    const t = tDirty ? validateTyres(sentTyres, tyresBase.version, day) : null;
+    const c = cDirty ? validateChecks(sentChecks, checksBase.version) : null;
+    const found = { ...(t?.errors ?? {}), ...(c?.errors ?? {}) };
+    setErrors(found);
+    if (Object.keys(found).length) return showFirstError();
+
+    const saved: string[] = [];
+    const stale = { ...conflict };
+    let fieldErrors: FieldErrors = {};
+    let other: string | null = null;
+    const fail = (err: unknown, part: "tyres" | "checks", toKeys: (f: Record<string, string>) => FieldErrors) => {
+      if (isApiError(err) && err.code === "stale_version") stale[part] = true;
+      else if (isApiError(err) && err.status === 400 && Object.keys(err.fields).length) fieldErrors = { ...fieldErrors, ...toKeys(err.fields) };
+      else other = messageOf(err);
+    };
+    // One after the other, so the second answer carries the cautions of both.
+    if (t) {
+      try {
+        adoptTyres(await saveTyres.mutateAsync(t.body), sentTyres, day);
+        stale.tyres = false;
+        saved.push("tyre readings");
+      } catch (err) {
+        fail(err, "tyres", (f) => tyreErrorKeys(f, t.positions));
+      }
+    }
+    if (c) {
+      try {
+        adoptChecks(await saveChecks.mutateAsync(c.body), sentChecks);
+        stale.checks = false;
+        saved.push("checks");
+      } catch (err) {
+        fail(err, "checks", (f) => checkErrorKeys(f, c.items));
+      }
+    }
+    setConflict(stale);
+    setErrors(fieldErrors);
+    setProblem(other);
+    if (saved.length) setNote(`Saved the ${saved.join(" and the ")}.`);
+    if (stale.tyres || stale.checks || other) showNotices();
+    else if (Object.keys(fieldErrors).length) showFirstError();
+  }
+
+  /** Their version replaces what was typed in the part that clashed. */
+  async function loadTheirs() {
+    try {
+      const data = await reload.mutateAsync();
+      if (conflict.tyres) {
+        setTyresBase(data.tyres);
+        setTyres(tyresFormFrom(data.tyres, today));
+      }
+      if (conflict.checks) {
+        setChecksBase(data.checks);
+        setChecks(checksFormFrom(data.checks));
+      }
+      setConflict({ tyres: false, checks: false });
+      setErrors({});
+      setNote("Their latest readings and checks are loaded.");
+    } catch (err) {
+      setProblem(messageOf(err));
+    }
+  }
+  /** Theirs become the base; what was typed stays in the form, ready to save over them. */
+  async function keepMine() {
+    try {
+      const data = await reload.mutateAsync();
+      if (conflict.tyres) setTyresBase(data.tyres);
+      if (conflict.checks) setChecksBase(data.checks);
+      setConflict({ tyres: false, checks: false });
+      setNote("Your values are kept. Save to replace theirs with them.");
+    } catch (err) {
+      setProblem(messageOf(err));
+    }
+  }
+
+  const errorCount = Object.keys(errors).length;
+  const inConflict = conflict.tyres || conflict.checks;
+  const what = tDirty && cDirty ? "tyres and checks" : tDirty ? "tyres" : cDirty ? "checks" : "";
+  const status = busy
+    ? "Saving…"
+    : errorCount
+      ? `${errorCount} field${errorCount === 1 ? " needs" : "s need"} attention; nothing with a mistake was saved.`
+      : inConflict
+        ? "Not saved: someone else saved first. Choose theirs or yours at the top."
+        : note ?? (dirty ? `Unsaved ${what}.` : "Everything on this screen is saved.");
+  const sparePosition: TyrePosition = "spare";
+  const answered = CHECK_ITEMS.filter((i) => checks[i].result !== "").length;
+  const measuredRoad = ROAD.filter((p) => tyres.tyres[p].treadInnerMm || tyres.tyres[p].treadCentreMm || tyres.tyres[p].treadOuterMm).length;
+
+  return (
+    <form onSubmit={save} noValidate aria-label="Tyres and checks" className="flex flex-col gap-6">
+      <div ref={noticesRef} className="flex scroll-mt-4 flex-col gap-3 empty:hidden">
+        {!canEdit ? <Notice tone="info" title="Your role can read the tyres and checks; workshop, sales and admin record them." /> : null}
+        {inConflict ? (
+          <Notice tone="caution" title="Someone saved these readings after you opened them">
+            <p>
+              {conflict.tyres && conflict.checks ? "The tyre readings and the checks were" : conflict.tyres ? "The tyre readings were" : "The checks were"} saved by someone
+              else. Yours were not saved and are still in the form until you choose.
+            </p>
+            <div className="mt-3 flex flex-col gap-2 sm:flex-row">
+              <Button type="button" tone="primary" busy={reload.isPending} onClick={loadTheirs}>
+                Load theirs
+              </Button>
+              <Button type="button" tone="secondary" disabled={reload.isPending} onClick={keepMine}>
+                Keep mine and save over theirs
+              </Button>
+            </div>
+            <p className="mt-2 text-xs text-ink-soft">“Load theirs” replaces what you typed in that part.</p>
+          </Notice>
+        ) : null}
+        {problem ? <Notice tone="danger" title={problem}>Nothing you typed has been lost; try again.</Notice> : null}
+      </div>
+
+      <CautionsPanel saved={ev.cautions} live={live} editing={dirty} />
+
+      <fieldset disabled={!canEdit} className="m-0 flex min-w-0 flex-col gap-8 border-0 p-0">
+        <section aria-labelledby="tyres-heading" className="flex flex-col gap-4">
+          <div>
+            <h2 id="tyres-heading" className="text-xl font-bold">
+              Tyres
+            </h2>
+            <p className="mt-1 text-sm text-ink-soft">
+              Measure in the main grooves at three points across each tyre; the shallowest decides. Legal minimum here {formatTreadDepth(rules.legalMinTreadMm, { locale })} (set in
+              Settings; local law decides how it is measured). {measuredRoad} of 4 road tyres measured.
+            </p>
+          </div>
+          <div className="max-w-xs">
+            <Measure
+              label="Measured on"
+              type="date"
+              max={today}
+              value={tyres.measuredOn}
+              error={errors.measuredOn}
+              hint="Tyre ages are worked out to this day."
+              onValue={(v) => {
+                touched();
+                setTyres((f) => ({ ...f, measuredOn: v }));
+              }}
+            />
+          </div>
+          {errors["tyres._"] ? <p className="text-sm font-bold text-brick">{errors["tyres._"]}</p> : null}
+          <div className="grid gap-4 lg:grid-cols-2">
+            {ROAD.map((p) => (
+              <TyreCard
+                key={p}
+                position={p}
+                value={tyres.tyres[p]}
+                measuredOn={tyres.measuredOn}
+                rules={rules}
+                locale={locale}
+                errors={errors}
+                copySize={p === "front_left" ? undefined : tyres.tyres.front_left.sizeDesignation}
+                onChange={(f, v) => setTyre(p, f, v)}
+              />
+            ))}
+            {tyres.spare ? (
+              <TyreCard
+                position={sparePosition}
+                value={tyres.tyres.spare}
+                measuredOn={tyres.measuredOn}
+                rules={rules}
+                locale={locale}
+                errors={errors}
+                copySize={tyres.tyres.front_left.sizeDesignation}
+                onChange={(f, v) => setTyre(sparePosition, f, v)}
+                action={
+                  <button
+                    type="button"
+                    aria-expanded="true"
+                    className="min-h-11 rounded-md border border-line-strong px-3 text-sm font-bold text-ink hover:border-ink-soft"
+                    onClick={() => {
+                      touched();
+                      setTyres((f) => ({ ...f, spare: false }));
+                    }}
+                  >
+                    No spare / not measured
+                  </button>
+                }
+              />
+            ) : (
+              <section aria-labelledby="spare-heading" className="flex flex-wrap items-center justify-between gap-3 rounded-lg border border-dashed border-line-strong bg-paper-raised p-4">
+                <div>
+                  <h3 id="spare-heading" className="text-lg font-bold">
+                    Spare
+                  </h3>
+                  <p className="text-sm text-ink-soft">
+                    No spare / not measured.{" "}
+                    {Object.values(tyres.tyres.spare).some((v) => v.trim()) ? "The values typed are kept here but not saved." : "Optional; record it when there is one."}
+                  </p>
+                </div>
+                <Button
+                  type="button"
+                  tone="secondary"
+                  aria-expanded="false"
+                  onClick={() => {
+                    touched();
+                    setTyres((f) => ({ ...f, spare: true }));
+                  }}
+                >
+                  Measure the spare
+                </Button>
+              </section>
+            )}
+          </div>
+        </section>
+
+        <section aria-labelledby="checks-heading" className="flex flex-col gap-3">
+          <div>
+            <h2 id="checks-heading" className="text-xl font-bold">
+              Safety and function checks
+            </h2>
+            <p className="mt-1 text-sm text-ink-soft">
+              {answered} of {CHECK_ITEMS.length} checked. A Fail on a safety item blocks publishing until it is repaired and checked again. Unanswered checks are not saved.
+            </p>
+          </div>
+          {errors["checks._"] ? <p className="text-sm font-bold text-brick">{errors["checks._"]}</p> : null}
+          <div className="rounded-lg border border-line bg-paper-raised px-4">
+            {CHECK_ITEMS.map((item) => {
+              const savedResult = checksBase.results.find((r) => r.item === item);
+              const unchanged = JSON.stringify(checks[item]) === JSON.stringify(checksBaseForm[item]);
+              return (
+                <CheckRow
+                  key={item}
+                  item={item}
+                  value={checks[item]}
+                  saved={savedResult && unchanged ? { checkedOn: savedResult.checkedOn, checkedBy: savedResult.checkedBy } : undefined}
+                  errors={errors}
+                  onChange={(v) => setCheck(item, v)}
+                />
+              );
+            })}
+          </div>
+          <p className="rounded-md border border-line bg-paper-sunk px-4 py-3 text-sm" data-testid="not-a-certificate">
+            {NOT_A_CERTIFICATE}
+          </p>
+        </section>
+      </fieldset>
+
+      {canEdit ? (
+        <div className="sticky bottom-0 z-10 -mx-5 flex flex-col gap-2 border-t-2 border-line-strong bg-paper px-5 pt-3 pb-[max(0.75rem,env(safe-area-inset-bottom))] sm:flex-row-reverse sm:items-center sm:justify-end sm:gap-4">
+          <p className={`text-sm ${errorCount || inConflict ? "font-bold text-brick" : "text-ink-soft"}`} aria-live="polite" data-testid="save-status">
+            {status}
+          </p>
+          <Button type="submit" tone={dirty || busy ? "primary" : "secondary"} busy={busy} disabled={!dirty} className="min-h-12 w-full text-lg sm:w-auto">
+            {what ? `Save ${what}` : "Saved"}
+          </Button>
+        </div>
+      ) : null}
+    </form>
+  );
+}
