@@ -14,6 +14,8 @@ import { vehiclesRoutes } from "./modules/vehicles/vehicles.routes.ts";
 import { photosRoutes } from "./modules/photos/photos.routes.ts";
 import { walkaroundRoutes } from "./modules/walkaround/walkaround.routes.ts";
 import { checksRoutes } from "./modules/checks/checks.routes.ts";
+import { publishingRoutes, publicVehiclesRoutes } from "./modules/publishing/publishing.routes.ts";
+import { pagesRoutes } from "./modules/publishing/pages.routes.ts";
 import { mediaRoutes } from "./modules/photos/media.routes.ts";
 import { clientRoutes } from "./modules/client/client.routes.ts";
 
@@ -74,13 +76,15 @@ export function createApp(ctx: AppContext): Express {
   api.use("/users", usersRoutes(ctx));
   api.use("/dealership", dealershipRoutes(ctx));
   api.use("/vehicles/:id/photos", photosRoutes(ctx));
-  api.use("/vehicles/:id", walkaroundRoutes(ctx), checksRoutes(ctx));
+  api.use("/vehicles/:id", walkaroundRoutes(ctx), checksRoutes(ctx), publishingRoutes(ctx));
   api.use("/vehicles", vehiclesRoutes(ctx));
   api.use("/public/dealership", publicDealershipRoutes(ctx));
+  api.use("/public/vehicles", publicVehiclesRoutes(ctx));
   api.use(apiNotFound);
   app.use("/api", api);
 
   app.use(mediaRoutes(ctx));
+  app.use(pagesRoutes(ctx));
   app.use(clientRoutes(ctx));
   app.use(errorHandler);
   return app;

@@ -144,6 +144,8 @@ describe("tyres and checks on a phone in Chromium", () => {
     await expect.poll(() => tyre(page, "Rear left").getByLabel("Rear left inner tread").inputValue()).toBe("1.4");
     expect(await page.getByLabel("Measured on").inputValue()).toBe("2025-06-20");
     expect(await tyre(page, "Front left").getByLabel("Front left outer tread").inputValue()).toBe("4.9");
+    // Stored as the number 5; read back to 1 dp as typed (../shared/TRADE.md §2.5: tread in mm to 1 dp).
+    expect(await tyre(page, "Front right").getByLabel("Front right inner tread").inputValue()).toBe("5.0");
     expect(await tyre(page, "Rear left").getByLabel("Rear left DOT date code").inputValue()).toBe("0414");
     expect(await tyre(page, "Rear right").getByLabel("Rear right size").inputValue()).toBe("235/60 R18 103V");
     expect(await tyre(page, "Front right").getByLabel("Front right pressure").inputValue()).toBe("240");
@@ -153,8 +155,6 @@ describe("tyres and checks on a phone in Chromium", () => {
     expect(await tyre(page, "Rear left").getByText("Below the legal minimum").count()).toBe(1);
     expect(await cautions.innerText()).toMatch(/Brakes failed/);
     expect(errors).toEqual([]);
-    await page.setViewportSize({ width: 1366, height: 900 }); // TEMP
-    await page.screenshot({ path: "/tmp/shots/desktop.png", fullPage: true }); // TEMP
     await page.close();
   });
 
@@ -172,7 +172,7 @@ describe("tyres and checks on a phone in Chromium", () => {
     await expect.poll(() => page.getByText("Someone saved these readings after you opened them").count()).toBe(1);
     expect(await tyre(page, "Front left").getByLabel("Front left inner tread").inputValue()).toBe("6.2");
     await page.getByRole("button", { name: "Load theirs" }).click();
-    await expect.poll(() => tyre(page, "Front left").getByLabel("Front left inner tread").inputValue()).toBe("7");
+    await expect.poll(() => tyre(page, "Front left").getByLabel("Front left inner tread").inputValue()).toBe("7.0");
     expect(await page.getByText("Someone saved these readings after you opened them").count()).toBe(0);
     await page.close();
   });

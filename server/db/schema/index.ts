@@ -10,3 +10,4 @@ export * from "./defects.ts";
 export * from "./walkaround.ts";
 export * from "./tyres.ts";
 export * from "./checks.ts";
+export * from "./revisions.ts";

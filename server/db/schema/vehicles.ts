@@ -59,6 +59,11 @@ export const vehicles = mysqlTable(
     /** Versions of the evidence sets, apart from the record's own, so the workshop and sales do not collide. */
     tyresVersion: int().notNull().default(0),
     checksVersion: int().notNull().default(0),
+    /** The public address, fixed at the first publish; null until then. */
+    publicSlug: varchar({ length: 120 }).unique(),
+    /** The newest published revision (the public page); null until the first publish. */
+    currentRevisionId: int(),
+    lastRevisionNumber: int().notNull().default(0),
     /** The last defect number issued for this vehicle. */
     lastDefectNumber: int().notNull().default(0),
     version: version(),

@@ -1,6 +1,6 @@
 import { isNotNull } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { defects, photos } from "../../db/schema/index.ts";
+import { defects, photos, revisionMedia } from "../../db/schema/index.ts";
 import { removeListed, type Storage } from "../../lib/storage.ts";
 
 /** Other modules (published revisions) register the keys they still need. */
@@ -15,6 +15,8 @@ async function referencedKeys(database: Database): Promise<Set<string>> {
     for (const v of p.variants) keys.add(v.key);
   }
   for (const d of await database.db.select({ key: defects.closeupKey }).from(defects).where(isNotNull(defects.closeupKey))) keys.add(d.key!);
+  // Published revisions keep their files for ever: what a buyer was shown must stay showable.
+  for (const r of await database.db.select({ key: revisionMedia.key }).from(revisionMedia)) keys.add(r.key);
   for (const source of sources) for (const k of await source(database)) keys.add(k);
   return keys;
 }

@@ -6,13 +6,12 @@ import { dealerships, vehicleEvents, vehicles, type Dealership, type Vehicle } f
 import { AppError, badRequest, conflict, forbidden, notFound, staleVersion } from "../../lib/errors.ts";
 import { auditFor, diffFields, recordAudit } from "../audit/audit.service.ts";
 import { getDealership, todayFor } from "../dealerships/dealerships.service.ts";
-import { computeDerived, type Derived } from "../../../shared/domain/derived.ts";
 import { vinCheck } from "../../../shared/domain/vin.ts";
-import { milesToKm } from "../../../shared/domain/units.ts";
 import { checkStatusMove } from "../../../shared/domain/status.ts";
 import { forbiddenFields } from "../../../shared/constants/vehicle-fields.ts";
 import type { CreateVehicleInput, StatusMoveInput, UpdateVehicleInput, VehicleListQuery } from "../../../shared/schemas/vehicles.ts";
 import { evidenceOf } from "../condition/condition.service.ts";
+import { publishingOf } from "../publishing/publishing.service.ts";
 import { eventsFor, featureSuggestions, findVehicle, listVehicles, makesInStock } from "./vehicles.queries.ts";
 import { presentVehicle, presentVehicleRow } from "./vehicles.presenter.ts";
 
@@ -20,7 +19,9 @@ const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealer
 
 export { todayFor };
 
-type Stored = Omit<typeof vehicles.$inferInsert, "id" | "dealershipId" | "stockNumber" | "stockedAt" | "derived">;
+import { deriveFor, odometerKmOf, type Stored } from "./derive.ts";
+
+export { deriveFor };
 
 /** Maps validated input to columns. The odometer keeps the unit it was read in; a km figure is kept beside it for sorting. */
 function toColumns(input: Partial<CreateVehicleInput>, defaultUnit: "km" | "mi"): Partial<Stored> {
@@ -37,31 +38,6 @@ function toColumns(input: Partial<CreateVehicleInput>, defaultUnit: "km" | "mi")
     out.odometerUnit = odometerUnit;
   }
   return out;
-}
-
-const odometerKmOf = (reading: number | null | undefined, unit: "km" | "mi") =>
-  reading == null ? null : unit === "mi" ? milesToKm(reading) : reading;
-
-export function deriveFor(v: Pick<Vehicle, keyof Stored> & { odometerKmIndex?: number | null }, d: Dealership, today: string): Derived {
-  return computeDerived(
-    {
-      vin: v.vin,
-      buildYear: v.buildYear,
-      firstRegistrationDate: v.firstRegistrationDate,
-      odometerKm: odometerKmOf(v.odometerReading, v.odometerUnit ?? "km"),
-      fuelType: v.fuelType,
-      powerKw: v.powerKw,
-      torqueNm: v.torqueNm,
-      fuelTankLitres: v.fuelTankLitres,
-      fuelConsumptionL100km: v.fuelConsumptionL100km,
-      consumptionTestCycle: v.consumptionTestCycle,
-      batteryKwh: v.batteryKwh,
-      energyKwh100km: v.energyKwh100km,
-      kerbWeightKg: v.kerbWeightKg,
-      serviceHistory: v.serviceHistory,
-    },
-    { today, checkDigitMandatory: d.vinCheckDigitMandatory, serviceIntervalKm: d.serviceIntervalKm, serviceIntervalMonths: d.serviceIntervalMonths },
-  );
 }
 
 /** Where the market makes the check digit mandatory, a wrong one is refused; elsewhere it is only a warning. */
@@ -90,7 +66,9 @@ export async function get(ctx: AppContext, actor: User, id: number) {
   if (!v) throw notFound("That vehicle");
   const d = await getDealership(db, actor.dealershipId);
   // Recomputed on read as well: "overdue" depends on today, not on the day of the last save.
-  return { ...presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now()), evidence: await evidenceOf(db, d, v) };
+  const evidence = await evidenceOf(db, d, v);
+  const publishing = await publishingOf(db, v, d, evidence, ctx.config.publicUrl);
+  return { ...presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now()), evidence, readiness: publishing.readiness, publishing };
 }
 
 export async function history(ctx: AppContext, actor: User, id: number) {

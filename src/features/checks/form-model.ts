@@ -5,6 +5,7 @@ import { zodFields } from "../../../shared/schemas/fields.ts";
 import { CHECK_ITEMS, CHECK_LABELS, TYRE_POSITION_LABELS, TYRE_POSITIONS, type CheckItem, type CheckResultCode, type TyrePosition } from "../../../shared/constants/evidence.ts";
 import { assessTyre, type TyreAssessment, type TyreReading } from "../../../shared/domain/tyre-assessment.ts";
 import { safetyCautions, type Caution } from "../../../shared/domain/cautions.ts";
+import { formatNumber } from "../../../shared/domain/display.ts";
 import type { ChecksSetView, TyresView } from "./api/checks.ts";
 
 export const TREAD_FIELDS = ["treadInnerMm", "treadCentreMm", "treadOuterMm"] as const;
@@ -46,7 +47,10 @@ export function tyresFormFrom(view: TyresView, today: string): TyresForm {
   for (const { reading } of view.readings) {
     const p = reading.position as TyrePosition;
     if (!tyres[p]) continue;
-    tyres[p] = Object.fromEntries(TYRE_FIELDS.map((f) => [f, text(reading[f])])) as TyreForm;
+    // Tread is recorded to 1 dp (TRADE.md §2.5), so a stored 5 reads back as it was typed, "5.0".
+    tyres[p] = Object.fromEntries(
+      TYRE_FIELDS.map((f) => [f, (TREAD_FIELDS as readonly string[]).includes(f) ? (formatNumber(reading[f] as number | null, { fractionDigits: 1 }) ?? "") : text(reading[f])]),
+    ) as TyreForm;
   }
   return { measuredOn: view.measuredOn ?? today, spare: view.readings.some((r) => r.reading.position === "spare"), tyres };
 }

@@ -1,0 +1,50 @@
+import { Router } from "express";
+import { z } from "zod";
+import QRCode from "qrcode";
+import type { AppContext } from "../../lib/context.ts";
+import { currentUser, requireRole } from "../../middleware/authenticate.ts";
+import { validate } from "../../middleware/validate.ts";
+import { publishSchema, type PublishBody } from "../../../shared/schemas/publishing.ts";
+import { publicListQuerySchema, type PublicListQuery } from "../../../shared/schemas/public-query.ts";
+import { publish } from "./publishing.service.ts";
+import { getPublic, listPublic, urlFor } from "./public.service.ts";
+
+const vehicleParams = z.object({ id: z.coerce.number().int().positive() });
+const slugParams = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,120}$/) });
+
+/** POST /api/vehicles/:id/publish. */
+export function publishingRoutes(ctx: AppContext): Router {
+  const router = Router({ mergeParams: true });
+  router.post("/publish", requireRole("admin", "sales"), validate("params", vehicleParams), validate("body", publishSchema), async (_req, res) => {
+    const { id } = res.locals.params as { id: number };
+    res.status(201).json(await publish(ctx, currentUser(res.locals), id, res.locals.body as PublishBody));
+  });
+  return router;
+}
+
+/** /api/public/vehicles: published revisions only, for anyone. */
+export function publicVehiclesRoutes(ctx: AppContext): Router {
+  const router = Router();
+  router.get("/", validate("query", publicListQuerySchema), async (_req, res) => {
+    res.setHeader("Cache-Control", "public, max-age=30");
+    res.json(await listPublic(ctx, res.locals.query as PublicListQuery));
+  });
+  router.get("/:slug", validate("params", slugParams), async (_req, res) => {
+    res.setHeader("Cache-Control", "public, max-age=30");
+    res.json({ vehicle: await getPublic(ctx, (res.locals.params as { slug: string }).slug) });
+  });
+  router.get("/:slug/revisions/:number", validate("params", slugParams.extend({ number: z.coerce.number().int().positive() })), async (_req, res) => {
+    const { slug, number } = res.locals.params as { slug: string; number: number };
+    // An older revision never changes, so it may be cached for long.
+    res.setHeader("Cache-Control", "public, max-age=86400");
+    res.json({ vehicle: await getPublic(ctx, slug, number) });
+  });
+  router.get("/:slug/qr.svg", validate("params", slugParams), async (_req, res) => {
+    const { slug } = res.locals.params as { slug: string };
+    await getPublic(ctx, slug);
+    const svg = await QRCode.toString(urlFor(ctx, slug), { type: "svg", errorCorrectionLevel: "M", margin: 2, color: { dark: "#18212c", light: "#ffffff" } });
+    res.type("image/svg+xml").setHeader("Cache-Control", "public, max-age=3600");
+    res.send(svg);
+  });
+  return router;
+}

@@ -1,0 +1,132 @@
+import { and, desc, eq } from "drizzle-orm";
+import type { User } from "lucia";
+import type { AppContext } from "../../lib/context.ts";
+import type { DbOrTx } from "../../db/client.ts";
+import { revisionMedia, revisions, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
+import { AppError, conflict, forbidden, notFound, staleVersion } from "../../lib/errors.ts";
+import { recordAudit } from "../audit/audit.service.ts";
+import { getDealership, todayFor } from "../dealerships/dealerships.service.ts";
+import { evidenceOf, type Evidence } from "../condition/condition.service.ts";
+import { findVehicle } from "../vehicles/vehicles.queries.ts";
+import { deriveFor } from "../vehicles/derive.ts";
+import { readiness, type Readiness } from "../../../shared/domain/readiness.ts";
+import { validateVinStructure, vinCheck } from "../../../shared/domain/vin.ts";
+import { allRoadTyresMeasured, ROAD_POSITIONS } from "../../../shared/domain/tyre-assessment.ts";
+import { describeChanges } from "../../../shared/domain/revision-changes.ts";
+import type { VehicleStatus } from "../../../shared/constants/vehicle.ts";
+import { buildSnapshot, mediaKeysOf } from "./snapshot.ts";
+
+const PUBLISHABLE_FROM: readonly VehicleStatus[] = ["preparing", "live", "reserved", "withdrawn"];
+
+export function readinessOf(v: Vehicle, d: Dealership, evidence: Evidence): Readiness {
+  const check = v.vin ? vinCheck(v.vin, { checkDigitMandatory: d.vinCheckDigitMandatory }) : null;
+  return readiness({
+    vin: { present: Boolean(v.vin), structurallyValid: v.vin ? validateVinStructure(v.vin).length === 0 : false, checkDigitBlocking: check?.blocking ?? false },
+    priceCents: v.priceCents,
+    description: v.description,
+    photos: { count: evidence.photos.length, processing: evidence.photos.filter((p) => p.status !== "ready").length, hasCover: evidence.photos.some((p) => p.isCover) },
+    minPhotos: d.minPhotos,
+    zones: evidence.zones,
+    roadTyresMeasured: ROAD_POSITIONS.filter((p) => evidence.tyres.readings.some((r) => r.reading.position === p && r.assessment.tread)).length,
+    blockingCautions: evidence.cautions.filter((c) => c.level === "block"),
+  });
+}
+
+const slugify = (s: string) =>
+  s
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-|-$/g, "")
+    .slice(0, 100);
+
+export const slugFor = (v: Pick<Vehicle, "buildYear" | "make" | "model" | "stockNumber">) => slugify([v.buildYear, v.make, v.model, v.stockNumber].filter(Boolean).join(" "));
+
+export async function latestRevision(db: DbOrTx, vehicleId: number) {
+  const [row] = await db.select().from(revisions).where(eq(revisions.vehicleId, vehicleId)).orderBy(desc(revisions.number)).limit(1);
+  return row ?? null;
+}
+
+export interface PublishInput {
+  version?: number;
+  overrideReason?: string;
+}
+
+/**
+ * Publishes the vehicle as it stands: one immutable revision written in one transaction, under the vehicle's row
+ * lock, so concurrent publishes queue up and each gets the next number. Not ready → 409 with the list; an admin may
+ * override with a written reason, which is recorded on the revision and in the audit log.
+ */
+export async function publish(ctx: AppContext, actor: User, vehicleId: number, input: PublishInput) {
+  return ctx.database.db.transaction(async (tx) => {
+    const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
+    if (!v) throw notFound("That vehicle");
+    if (input.version !== undefined && input.version !== v.version) throw staleVersion({ version: v.version, status: v.status });
+    if (!PUBLISHABLE_FROM.includes(v.status)) {
+      throw conflict(`A vehicle that is ${v.status} cannot be published. ${v.status === "intake" ? "Start preparing it first." : ""}`.trim(), { status: v.status }, "illegal_move");
+    }
+    const d = await getDealership(tx, actor.dealershipId);
+    const evidence = await evidenceOf(tx, d, v);
+    const ready = readinessOf(v, d, evidence);
+    let overrideReason: string | null = null;
+    if (!ready.ready) {
+      if (!input.overrideReason) {
+        throw new AppError(409, "not_ready", `Not ready to publish: ${ready.missing.map((m) => m.label.toLowerCase()).join("; ")}.`, undefined, { readiness: ready });
+      }
+      if (actor.role !== "admin") throw forbidden("Only an admin may publish a vehicle that is not ready.");
+      // Photos still processing have no served sizes yet; a revision must never point at files still being made.
+      if (ready.missing.some((m) => m.code === "photos_processing")) {
+        throw new AppError(409, "not_ready", "Photos are still being prepared; wait a minute and publish again.", undefined, { readiness: ready });
+      }
+      overrideReason = input.overrideReason;
+    }
+    const derived = deriveFor(v, d, todayFor(ctx, d));
+    const snapshot = buildSnapshot(v, derived, evidence, d);
+    const previous = await latestRevision(tx, v.id);
+    const changes = describeChanges(previous?.snapshot ?? null, snapshot, d.locale);
+    const number = v.lastRevisionNumber + 1;
+    const slug = v.publicSlug ?? slugFor(v);
+    const now = ctx.now();
+    const [res] = await tx.insert(revisions).values({
+      vehicleId: v.id, number, slug, snapshot, changes, publishedAt: now, publishedBy: actor.id, publishedByName: actor.name, overrideReason,
+      title: snapshot.title, make: v.make, model: v.model, bodyType: v.bodyType, fuelType: v.fuelType, priceCents: v.priceCents,
+      odometerKm: v.odometerKmIndex, buildYear: v.buildYear, conditionIndex: snapshot.condition.index,
+    });
+    const keys = mediaKeysOf(snapshot);
+    if (keys.length) await tx.insert(revisionMedia).values(keys.map((key) => ({ revisionId: res.insertId, key })));
+    const goesLive = v.status === "preparing" || v.status === "withdrawn";
+    await tx
+      .update(vehicles)
+      .set({ publicSlug: slug, currentRevisionId: res.insertId, lastRevisionNumber: number, version: v.version + 1, ...(goesLive ? { status: "live" as const } : {}) })
+      .where(eq(vehicles.id, v.id));
+    if (goesLive) {
+      await tx.insert(vehicleEvents).values({ vehicleId: v.id, fromStatus: v.status, toStatus: "live", note: overrideReason ? `Published over a block: ${overrideReason}` : `Published revision ${number}`, userId: actor.id, userName: actor.name });
+    }
+    await recordAudit(tx, { id: actor.id, email: actor.email, dealershipId: actor.dealershipId }, {
+      action: overrideReason ? "published_with_override" : "published",
+      entityType: "vehicle",
+      entityId: v.id,
+      after: { revision: number, slug, changes, ...(overrideReason ? { overrideReason, missing: ready.missing.map((m) => m.code) } : {}) },
+    });
+    const url = `${ctx.config.publicUrl}/vehicles/${slug}`;
+    return { revision: { number, publishedAt: now.toISOString(), changes, overrideReason }, slug, url };
+  });
+}
+
+/** The staff view of a vehicle's publishing: readiness now, and every revision with who published it. */
+export async function publishingOf(db: DbOrTx, v: Vehicle, d: Dealership, evidence: Evidence, publicUrl: string) {
+  const list = await db
+    .select({ number: revisions.number, publishedAt: revisions.publishedAt, publishedByName: revisions.publishedByName, overrideReason: revisions.overrideReason, changes: revisions.changes })
+    .from(revisions)
+    .where(eq(revisions.vehicleId, v.id))
+    .orderBy(desc(revisions.number));
+  return {
+    readiness: readinessOf(v, d, evidence),
+    slug: v.publicSlug,
+    url: v.publicSlug ? `${publicUrl}/vehicles/${v.publicSlug}` : null,
+    revisions: list.map((r) => ({ ...r, publishedAt: r.publishedAt.toISOString() })),
+  };
+}
+
+export { allRoadTyresMeasured, and };
