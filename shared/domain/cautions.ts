@@ -2,6 +2,7 @@
 // lamps). Each says what to do, and defers to local law and licensed inspectors. Common practice, no source.
 import { isSafetyCheckItem } from "./condition-rules.ts";
 import type { TyreAssessment } from "./tyre-assessment.ts";
+import { formatTreadDepth } from "./display.ts";
 
 export interface Caution {
   level: "block" | "advise";
@@ -32,11 +33,11 @@ export function safetyCautions(
       out.push({
         level: "block",
         code: `tyre_below_minimum_${t.position}`,
-        text: `${positionLabel(t.position)} tyre: ${t.tread.leastMm} mm at its shallowest, below the legal minimum. Replace it before the vehicle is driven on the road; local law sets the minimum and how it is measured.`,
+        text: `${positionLabel(t.position)} tyre: ${formatTreadDepth(t.tread.leastMm, { fractionDigits: 1 })} at its shallowest, below the legal minimum. Replace it before the vehicle is driven on the road; local law sets the minimum and how it is measured.`,
       });
     }
     if (t.ageAdvisory === "strong") {
-      out.push({ level: "advise", code: `tyre_age_strong_${t.position}`, text: `${positionLabel(t.position)} tyre is ${t.ageYears} years old. Many makers advise replacing tyres at 10 years whatever the tread; have it inspected or replaced.` });
+      out.push({ level: "advise", code: `tyre_age_strong_${t.position}`, text: `${positionLabel(t.position)} tyre is ${t.ageYears} years old. Ten years is where some road authorities draw the line for tyre age whatever the tread; have it replaced or inspected by a tyre specialist.` });
     } else if (t.ageAdvisory === "advise") {
       out.push({ level: "advise", code: `tyre_age_${t.position}`, text: `${positionLabel(t.position)} tyre is ${t.ageYears} years old. Vehicle makers commonly advise replacing tyres from 6 years; have it checked.` });
     }

@@ -32,7 +32,15 @@ export const zoneMarkSchema = z.strictObject({
   nothingFound: z.boolean({ error: "Say whether the zone was checked with nothing found." }),
 });
 
-const depth = (label: string) => z.number({ error: `${label} must be a number of millimetres.` }).min(0, `${label} cannot be negative.`).max(30, `${label} is at most 30 mm.`).nullable().optional();
+// Tread is recorded to 0.1 mm (../shared/TRADE.md §2.5).
+const depth = (label: string) =>
+  z
+    .number({ error: `${label} must be a number of millimetres.` })
+    .min(0, `${label} cannot be negative.`)
+    .max(30, `${label} is at most 30 mm.`)
+    .refine((v) => Math.abs(v * 10 - Math.round(v * 10)) < 1e-9, `${label}: one decimal place, like 4.5.`)
+    .nullable()
+    .optional();
 
 export const tyreReadingSchema = z.strictObject({
   position: z.enum(TYRE_POSITIONS, { error: "Unknown tyre position." }),
@@ -40,9 +48,15 @@ export const tyreReadingSchema = z.strictObject({
   treadCentreMm: depth("Centre tread"),
   treadOuterMm: depth("Outer tread"),
   sizeDesignation: z.string().trim().max(40, "At most 40 characters.").nullable().optional(),
-  dotCode: z.string().trim().regex(/^(\d{3,4})?$/, "The date code is the last 3 or 4 digits of the DOT number, like 2319.").nullable().optional(),
-  pressureKpa: z.number({ error: "Pressure must be a number of kPa." }).min(0).max(1000, "At most 1000 kPa.").nullable().optional(),
-});
+  dotCode: z
+    .string()
+    .trim()
+    .regex(/^(\d{3,4})?$/, "The date code is the last 3 or 4 digits of the DOT number, like 2319.")
+    .refine((c) => c === "" || (Number(c.slice(0, 2)) >= 1 && Number(c.slice(0, 2)) <= 53), "The first two digits are the week: 01 to 53.")
+    .nullable()
+    .optional(),
+  pressureKpa: z.number({ error: "Pressure must be a number of kPa." }).min(0, "Pressure cannot be negative.").max(1000, "At most 1000 kPa.").nullable().optional(),
+}).refine((r) => [r.treadInnerMm, r.treadCentreMm, r.treadOuterMm, r.sizeDesignation, r.dotCode, r.pressureKpa].some((v) => v !== null && v !== undefined && v !== ""), "Enter at least one reading for this tyre, or leave the tyre out.");
 export type TyreReadingInput = z.infer<typeof tyreReadingSchema>;
 
 export const tyresSchema = (today: string) =>

@@ -56,22 +56,33 @@ export async function get(ctx: AppContext, actor: User, vehicleId: number) {
   return presentChecks(d, v, tyres, checks);
 }
 
-const stale = (what: string) => conflict(`Someone saved the ${what} after you opened them. Reload to see theirs; your readings are still in the form.`, undefined, "stale_version");
+const stale = (what: string, current: unknown) =>
+  conflict(`Someone saved the ${what} after you opened them. Reload to see theirs; your readings are still in the form.`, { current }, "stale_version");
+
+const sameReading = (a: Record<string, unknown>, b: Record<string, unknown>) =>
+  ["treadInnerMm", "treadCentreMm", "treadOuterMm", "sizeDesignation", "dotCode", "pressureKpa"].every((k) => (a[k] ?? null) === (b[k] ?? null));
 
 /** Replaces the tyre readings as a set, so the record always shows one measuring session. */
 export async function putTyres(ctx: AppContext, actor: User, vehicleId: number, input: TyresInput) {
   return ctx.database.db.transaction(async (tx) => {
     const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
     if (!v) throw notFound("That vehicle");
-    if (v.tyresVersion !== input.version) throw stale("tyre readings");
+    const d = await getDealership(tx, actor.dealershipId);
     const before = await tyresOf(tx, vehicleId);
+    if (v.tyresVersion !== input.version) throw stale("tyre readings", presentChecks(d, v, before, await checksOf(tx, vehicleId)));
     await tx.delete(tyreReadings).where(eq(tyreReadings.vehicleId, vehicleId));
     if (input.readings.length) {
-      await tx.insert(tyreReadings).values(input.readings.map((r) => ({ ...r, vehicleId, measuredOn: input.measuredOn, measuredBy: actor.name })));
+      // A reading carried over unchanged keeps the name of whoever measured it.
+      await tx.insert(tyreReadings).values(
+        input.readings.map((r) => {
+          const old = before.find((b) => b.position === r.position);
+          const kept = old && old.measuredOn === input.measuredOn && sameReading(old, r);
+          return { ...r, vehicleId, measuredOn: input.measuredOn, measuredBy: kept ? old.measuredBy : actor.name };
+        }),
+      );
     }
     await tx.update(vehicles).set({ tyresVersion: v.tyresVersion + 1 }).where(eq(vehicles.id, vehicleId));
     await recordAudit(tx, actorOf(actor), { action: "tyres_recorded", entityType: "vehicle", entityId: vehicleId, before: { readings: before }, after: { measuredOn: input.measuredOn, readings: input.readings } });
-    const d = await getDealership(tx, actor.dealershipId);
     return presentChecks(d, { ...v, tyresVersion: v.tyresVersion + 1 }, await tyresOf(tx, vehicleId), await checksOf(tx, vehicleId));
   });
 }
@@ -80,12 +91,19 @@ export async function putChecks(ctx: AppContext, actor: User, vehicleId: number,
   return ctx.database.db.transaction(async (tx) => {
     const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
     if (!v) throw notFound("That vehicle");
-    if (v.checksVersion !== input.version) throw stale("checks");
     const d = await getDealership(tx, actor.dealershipId);
     const before = await checksOf(tx, vehicleId);
+    if (v.checksVersion !== input.version) throw stale("checks", presentChecks(d, v, await tyresOf(tx, vehicleId), before));
     await tx.delete(checkResults).where(eq(checkResults.vehicleId, vehicleId));
     if (input.results.length) {
-      await tx.insert(checkResults).values(input.results.map((r) => ({ ...r, vehicleId, checkedOn: todayFor(ctx, d), checkedBy: actor.name })));
+      // An answer carried over unchanged keeps the day and the name of whoever checked it.
+      await tx.insert(checkResults).values(
+        input.results.map((r) => {
+          const old = before.find((b) => b.item === r.item);
+          const kept = old && old.result === r.result && old.note === r.note;
+          return { ...r, vehicleId, checkedOn: kept ? old.checkedOn : todayFor(ctx, d), checkedBy: kept ? old.checkedBy : actor.name };
+        }),
+      );
     }
     await tx.update(vehicles).set({ checksVersion: v.checksVersion + 1 }).where(eq(vehicles.id, vehicleId));
     await recordAudit(tx, actorOf(actor), { action: "checks_recorded", entityType: "vehicle", entityId: vehicleId, before: { results: before }, after: { results: input.results } });

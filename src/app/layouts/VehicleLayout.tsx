@@ -4,6 +4,7 @@ import { useDealership, type DealershipView } from "../../features/settings/api/
 import { useVehicle, type VehicleView } from "../../features/vehicles/api/vehicles.ts";
 import { StatusActions } from "../../features/vehicles/components/StatusActions.tsx";
 import { StatusBadge } from "../../features/vehicles/components/StatusBadge.tsx";
+import { PublishPanel } from "../../features/publishing/components/PublishPanel.tsx";
 import { ConditionSummary } from "../../features/vehicles/components/ConditionSummary.tsx";
 import { odometerText, priceText, vehicleTitle } from "../../features/vehicles/format.ts";
 import { Panel } from "../../components/ui/Page.tsx";
@@ -62,6 +63,11 @@ export default function VehicleLayout() {
               <NavLink
                 to={t.to}
                 end={t.end}
+                ref={(el) => {
+                  // On a phone the tab bar scrolls sideways; keep the open section's tab in view without moving the page.
+                  const bar = el?.closest("nav");
+                  if (el && bar && el.getAttribute("aria-current") === "page") bar.scrollLeft = Math.max(0, el.offsetLeft - 16);
+                }}
                 className={({ isActive }) => `block whitespace-nowrap border-b-3 px-4 py-3 font-bold no-underline ${isActive ? "border-signal text-ink" : "border-transparent text-ink-soft hover:text-ink"}`}
               >
                 {t.label}
@@ -79,6 +85,9 @@ export default function VehicleLayout() {
         <aside className="flex flex-col gap-6">
           <Panel title="Condition">
             <ConditionSummary evidence={vehicle.evidence} />
+          </Panel>
+          <Panel title="Publishing">
+            <PublishPanel vehicle={vehicle} role={user.role} />
           </Panel>
           <Panel title="Status">
             <StatusActions vehicle={vehicle} role={user.role} />

@@ -3,10 +3,14 @@ import { get, patch, post } from "../../../lib/api-client.ts";
 import type { StatusMoveInput, VehicleListQuery } from "../../../../shared/schemas/vehicles.ts";
 import type { VehicleRow, VehicleView as VehicleRecord } from "../../../../server/modules/vehicles/vehicles.presenter.ts";
 import type { Evidence } from "../../../../server/modules/condition/condition.service.ts";
+import type { publishingOf } from "../../../../server/modules/publishing/publishing.service.ts";
+import type { Readiness } from "../../../../shared/domain/readiness.ts";
+
+export type Publishing = Awaited<ReturnType<typeof publishingOf>>;
 
 /** The record as a write returns it; the detail read adds the evidence. */
 export type { VehicleRow, VehicleRecord, Evidence };
-export type VehicleView = VehicleRecord & { evidence: Evidence };
+export type VehicleView = VehicleRecord & { evidence: Evidence; readiness: Readiness; publishing: Publishing };
 
 export interface VehicleList {
   vehicles: VehicleRow[];

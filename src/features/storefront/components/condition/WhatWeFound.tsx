@@ -58,7 +58,7 @@ export function WhatWeFound({ snapshot, locale }: { snapshot: PublicSnapshot; lo
         </p>
       }
     >
-      <div className="grid gap-5 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+      <div className="fr-found-head grid gap-5 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <ConditionIndex condition={condition} locale={locale} />
         <SeverityCounts condition={condition} defects={defects} locale={locale} />
       </div>
