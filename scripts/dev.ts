@@ -8,7 +8,7 @@ import { seedDemoIfEmpty } from "../server/db/seed/demo.ts";
 
 await ensureLocalDatabase();
 const database = await connect(process.env.DATABASE_URL!);
-await seedDemoIfEmpty(database.db, { password: process.env.DEMO_PASSWORD ?? "forthright-demo", storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) });
+await seedDemoIfEmpty(database.db, { password: process.env.DEMO_PASSWORD ?? "forthright-demo", storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")), publicUrl: process.env.PUBLIC_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`, log: console.log });
 await database.close();
 
 const port = process.env.PORT ?? "3000";

@@ -14,10 +14,10 @@ const database = await connect(process.env.DATABASE_URL!);
 const password = process.env.DEMO_PASSWORD ?? "forthright-demo";
 try {
   if (process.argv.includes("--reset")) {
-    await resetDemo(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) });
+    await resetDemo(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")), publicUrl: process.env.PUBLIC_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`, log: console.log });
     console.log("Rebuilt the demo dealership.");
   } else {
-    console.log((await seedDemoIfEmpty(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) })) ? "Seeded the demo dealership." : "Demo data already present.");
+    console.log((await seedDemoIfEmpty(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")), publicUrl: process.env.PUBLIC_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`, log: console.log })) ? "Seeded the demo dealership." : "Demo data already present.");
   }
 } finally {
   await database.close();

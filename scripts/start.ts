@@ -17,7 +17,8 @@ const password = process.env.DEMO_PASSWORD ?? "forthright-demo";
   const database = await connect(process.env.DATABASE_URL!);
   try {
     if (!production) {
-      const seeded = await seedDemoIfEmpty(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")) });
+      console.log("Checking for demo data…");
+      const seeded = await seedDemoIfEmpty(database.db, { password, storage: localStorage(path.resolve(process.env.UPLOADS_DIR ?? "uploads")), publicUrl: process.env.PUBLIC_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`, log: console.log });
       console.log(seeded ? "Seeded the demo dealership." : "Demo data already present; keeping it.");
     }
   } finally {

@@ -50,6 +50,10 @@ export interface SeedOptions {
   password: string;
   /** Where demo photos are stored; without it the demo has no photos or walk-around evidence. */
   storage?: Storage;
+  /** The site's address, for the URLs published revisions record. */
+  publicUrl?: string;
+  /** Progress lines for a person waiting at the terminal. */
+  log?: (line: string) => void;
 }
 
 export async function seedDemoIfEmpty(db: Db, options: SeedOptions): Promise<boolean> {

@@ -2,6 +2,7 @@
 // numbers are rounded; this file only picks labels and joins them.
 import { formatDistance, formatMoney, formatNumber, THIN_SPACE } from "../../../shared/domain/display.ts";
 import { LABELS } from "../../../shared/constants/vehicle.ts";
+import type { PublicDealership } from "../../../shared/schemas/dealership.ts";
 import {
   CHECK_RESULT_LABELS,
   DEFECT_KIND_LABELS,
@@ -52,16 +53,26 @@ export const yearText = (year: number | null) => (year === null ? null : String(
  * "2 December 2025". A date-only value ("2025-12-02") is a calendar day and is shown as that day everywhere; a
  * timestamp is shown on the reader's own calendar.
  */
-export function dateText(value: string | null | undefined, locale = "en", style: "long" | "medium" = "long"): string | null {
+export function dateText(value: string | null | undefined, locale = "en", style: "long" | "medium" = "long", timeZone?: string): string | null {
   if (!value) return null;
   const dateOnly = /^\d{4}-\d{2}-\d{2}$/.test(value);
   const date = new Date(dateOnly ? `${value}T00:00:00Z` : value);
   if (Number.isNaN(date.getTime())) return value;
+  const zone = dateOnly ? { timeZone: "UTC" } : timeZone ? { timeZone } : {};
   try {
-    return new Intl.DateTimeFormat(locale, { dateStyle: style, ...(dateOnly ? { timeZone: "UTC" } : {}) }).format(date);
+    return new Intl.DateTimeFormat(locale, { dateStyle: style, ...zone }).format(date);
   } catch {
     return new Intl.DateTimeFormat("en", { dateStyle: style, ...(dateOnly ? { timeZone: "UTC" } : {}) }).format(date);
   }
+}
+
+/**
+ * The day a revision was published, on the dealership's calendar when the server says which it is (so it matches the
+ * inspection day, which is a calendar day there), else on the reader's own.
+ */
+export function publishedText(iso: string, dealership: PublicDealership, style: "long" | "medium" = "long"): string {
+  const zone = (dealership as PublicDealership & { timeZone?: unknown }).timeZone;
+  return dateText(iso, dealership.locale || "en", style, typeof zone === "string" && zone ? zone : undefined) ?? iso;
 }
 
 /** The address on one line. */

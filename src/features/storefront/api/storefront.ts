@@ -27,8 +27,8 @@ export const storefrontKeys = {
 };
 
 /**
- * A GET that keeps everything the server sent with an error: a withdrawn vehicle answers 410 with the dealership
- * beside the error, which the polite page needs. Errors are the client's usual ApiError, so the query client's
+ * A GET that keeps everything the server sent with an error: a withdrawn vehicle answers 410 with the dealership,
+ * which the polite page needs. Errors are the client's usual ApiError, so the query client's
  * "4xx is final" retry rule applies.
  */
 async function getPublic<T>(path: string, signal?: AbortSignal): Promise<T> {
@@ -50,12 +50,14 @@ async function getPublic<T>(path: string, signal?: AbortSignal): Promise<T> {
     const body = (data && typeof data === "object" ? data : {}) as Record<string, unknown>;
     const { error, ...rest } = body;
     const e = (typeof error === "object" && error !== null ? error : { message: error }) as Record<string, unknown>;
+    const { code, message, fields, ...extra } = e;
+    // Extras may come inside the error object or beside it; both end up in `details`.
     throw new ApiError(
       response.status,
-      typeof e.code === "string" ? e.code : `http_${response.status}`,
-      typeof e.message === "string" ? e.message : `The server answered ${response.status}.`,
-      {},
-      rest,
+      typeof code === "string" ? code : `http_${response.status}`,
+      typeof message === "string" ? message : `The server answered ${response.status}.`,
+      (fields as Record<string, string>) ?? {},
+      { ...rest, ...extra },
     );
   }
   return data as T;

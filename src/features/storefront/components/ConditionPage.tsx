@@ -1,6 +1,6 @@
 import { Link } from "react-router";
 import type { PublicVehicle } from "../../../../shared/schemas/public.ts";
-import { dateText, shortUrl } from "../format.ts";
+import { publishedText, shortUrl } from "../format.ts";
 import { SiteFooter, SiteHeader } from "./SiteChrome.tsx";
 import { AboutReport } from "./condition/AboutReport.tsx";
 import { Cautions } from "./condition/Cautions.tsx";
@@ -22,11 +22,11 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
   const s = vehicle.snapshot;
   const locale = s.dealership.locale || "en";
   const older = vehicle.revision.number < latest;
-  const published = dateText(vehicle.revision.publishedAt, locale);
+  const published = publishedText(vehicle.revision.publishedAt, s.dealership);
   const current = `/vehicles/${encodeURIComponent(vehicle.slug)}`;
   return (
     <div className="fr-report flex min-h-dvh flex-col">
-      <PrintPage url={vehicle.url} revision={vehicle.revision.number} published={published ?? ""} />
+      <PrintPage url={vehicle.url} revision={vehicle.revision.number} published={published} />
       <SiteHeader dealership={s.dealership}>
         <Link to="/" className="inline-flex min-h-11 items-center">
           All vehicles
@@ -52,18 +52,25 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
           <TyresAndChecks snapshot={s} locale={locale} />
           <Cautions cautions={s.cautions} />
           <Specifications snapshot={s} locale={locale} />
-          <ServiceHistory snapshot={s} locale={locale} />
-          {s.descriptionHtml.trim() ? (
-            <Section id="listing" title="About this vehicle" className="fr-listing">
-              <div className="prose-copy max-w-prose" dangerouslySetInnerHTML={{ __html: s.descriptionHtml }} />
-            </Section>
-          ) : null}
-          <Revisions slug={vehicle.slug} revisions={vehicle.revisions.length ? vehicle.revisions : [vehicle.revision]} viewing={vehicle.revision.number} latest={latest} locale={locale} />
-          <Dealership snapshot={s} />
-          <AboutReport snapshot={s} revision={vehicle.revision.number} publishedAt={vehicle.revision.publishedAt} locale={locale} />
-          <Enquiry snapshot={s} status={vehicle.status} />
+          {/* Two columns where it helps on a wide screen; one after the other, in this order, on a phone and on paper. */}
+          <div className="fr-pair grid gap-10 lg:grid-cols-2">
+            <ServiceHistory snapshot={s} locale={locale} />
+            {s.descriptionHtml.trim() ? (
+              <Section id="listing" title="About this vehicle" className="fr-listing">
+                <div className="prose-copy max-w-prose" dangerouslySetInnerHTML={{ __html: s.descriptionHtml }} />
+              </Section>
+            ) : null}
+          </div>
+          <div className="fr-pair grid gap-10 lg:grid-cols-2">
+            <Revisions slug={vehicle.slug} revisions={vehicle.revisions.length ? vehicle.revisions : [vehicle.revision]} viewing={vehicle.revision.number} latest={latest} dealership={s.dealership} />
+            <Dealership snapshot={s} />
+          </div>
+          <div className="fr-pair grid gap-10 lg:grid-cols-2">
+            <AboutReport snapshot={s} revision={vehicle.revision.number} publishedAt={vehicle.revision.publishedAt} locale={locale} />
+            <Enquiry snapshot={s} status={vehicle.status} />
+          </div>
           <div className="border-t border-line pt-6 print:hidden">
-            <ReportActions slug={vehicle.slug} />
+            <ReportActions slug={vehicle.slug} enquiryLink={false} />
           </div>
           <p className="fr-print-footer hidden text-sm print:block">
             {shortUrl(vehicle.url)} · Revision {vehicle.revision.number}, published {published}

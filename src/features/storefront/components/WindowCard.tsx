@@ -3,7 +3,7 @@ import { Link } from "react-router";
 import type { PublicVehicle } from "../../../../shared/schemas/public.ts";
 import { formatConditionIndex } from "../../../../shared/domain/display.ts";
 import { qrCodeUrl } from "../api/storefront.ts";
-import { dateText, label, odometerText, priceText, rangeText, shortUrl, yearText } from "../format.ts";
+import { label, publishedText, odometerText, priceText, rangeText, shortUrl, yearText } from "../format.ts";
 import { Qty } from "./Figure.tsx";
 
 // Sizes are fractions of the card's width (cqw), so the screen preview and the printed A5 sheet are the same design;
@@ -64,7 +64,7 @@ export function WindowCard({ vehicle }: { vehicle: PublicVehicle }) {
         >
           <header className={`flex flex-wrap items-baseline justify-between gap-x-4 border-b-2 border-ink pb-[1cqw] ${t.name}`}>
             <strong>{d.name}</strong>
-            <span className="font-bold">Condition report inside</span>
+            {d.phone ? <span className="font-bold figures">{d.phone}</span> : null}
           </header>
 
           <div className="grid flex-1 grid-cols-1 gap-[max(1rem,3cqw)] md:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
@@ -117,7 +117,15 @@ export function WindowCard({ vehicle }: { vehicle: PublicVehicle }) {
                 />
                 <p className={`min-w-0 ${t.small}`}>
                   <strong className="block">Scan for the full condition report</strong>
-                  <span className="font-mono break-all">{url}</span>
+                  <span className="mt-[0.4cqw] block font-mono [overflow-wrap:anywhere]">
+                    {url.split("/").map((part, i) => (
+                      <span key={i}>
+                        {i > 0 ? "/" : ""}
+                        {i > 0 ? <wbr /> : null}
+                        {part}
+                      </span>
+                    ))}
+                  </span>
                 </p>
               </div>
             </div>
@@ -125,10 +133,9 @@ export function WindowCard({ vehicle }: { vehicle: PublicVehicle }) {
 
           <footer className={`border-t border-ink pt-[0.8cqw] ${t.small}`}>
             {d.name}
-            {d.licenceNumber ? ` · Dealer licence ${d.licenceNumber}` : ""} · Stock <span className="font-mono">{s.stockNumber}</span>
-            {d.phone ? ` · ${d.phone}` : ""}
+            {d.licenceNumber ? ` · Dealer licence ${d.licenceNumber}` : ""} · Stock number <span className="font-mono">{s.stockNumber}</span>
             <span className="block">
-              From report revision {vehicle.revision.number} of {dateText(vehicle.revision.publishedAt, locale, "medium")}. Not a roadworthiness or safety certificate; have it inspected
+              From report revision {vehicle.revision.number} of {publishedText(vehicle.revision.publishedAt, d, "medium")}. Not a roadworthiness or safety certificate; have it inspected
               independently.
             </span>
           </footer>

@@ -1,6 +1,6 @@
 import type { PublicSnapshot } from "../../../../../shared/schemas/public.ts";
 import { NOT_A_CERTIFICATE } from "../../../../../shared/domain/cautions.ts";
-import { dateText } from "../../format.ts";
+import { dateText, publishedText } from "../../format.ts";
 import { Section } from "./Section.tsx";
 
 /** The usual cautions (PRODUCT.md, TRADE.md §8): what the report is, what it is not, and what the buyer should do. */
@@ -10,7 +10,7 @@ export function AboutReport({ snapshot: s, revision, publishedAt, locale }: { sn
     <Section id="about-report" title="About this report">
       <div className="fr-about flex max-w-prose flex-col gap-3">
         <p>
-          {inspected ? <>This is revision {revision} of the report, published on {dateText(publishedAt, locale)}, from the inspection on {inspected}</> : <>This is revision {revision} of the report, published on {dateText(publishedAt, locale)}</>}
+          {inspected ? <>This is revision {revision} of the report, published on {publishedText(publishedAt, s.dealership)}, from the inspection on {inspected}</> : <>This is revision {revision} of the report, published on {publishedText(publishedAt, s.dealership)}</>}
           {s.inspectedBy ? <> by {s.inspectedBy}</> : null}. A published revision is never changed afterwards.
         </p>
         <p className="font-bold">{NOT_A_CERTIFICATE}</p>
@@ -22,7 +22,12 @@ export function AboutReport({ snapshot: s, revision, publishedAt, locale }: { sn
           The legal thresholds shown here, such as the minimum tread depth and tyre age advice, are for information. Local law and a licensed inspector decide.
           The odometer figure is the reading on the instrument at the inspection.
         </p>
-        {s.disclaimerHtml ? <div className="prose-copy" dangerouslySetInnerHTML={{ __html: s.disclaimerHtml }} /> : null}
+        {s.disclaimerHtml ? (
+          <div className="border-l-4 border-line-strong pl-3">
+            <p className="text-sm font-bold">In {s.dealership.name}’s own words</p>
+            <div className="prose-copy" dangerouslySetInnerHTML={{ __html: s.disclaimerHtml }} />
+          </div>
+        ) : null}
       </div>
     </Section>
   );

@@ -1,6 +1,6 @@
 import type { PublicVehicle } from "../../../../../shared/schemas/public.ts";
 import { formatConditionIndex } from "../../../../../shared/domain/display.ts";
-import { count, dateText, label, odometerText, priceText, rangeText, yearText } from "../../format.ts";
+import { addressLine, count, dateText, label, odometerText, priceText, publishedText, rangeText, yearText } from "../../format.ts";
 import { Qty } from "../Figure.tsx";
 import { ReportActions } from "./NextSteps.tsx";
 import { Fact } from "./Section.tsx";
@@ -15,8 +15,11 @@ export function KeySummary({ vehicle, locale }: { vehicle: PublicVehicle; locale
   const blocks = s.cautions.filter((c) => c.level === "block");
   return (
     <div className="fr-summary flex min-w-0 flex-col gap-5">
-      <p className="hidden text-sm print:block">
-        Condition report · {s.dealership.name}
+      {/* On paper the dealership's details head the report (the "Who is selling it" section is left off there). */}
+      <p className="fr-print-head hidden print:block">
+        <strong>Condition report · {s.dealership.name}</strong>, {addressLine(s.dealership)}
+        {s.dealership.phone ? ` · ${s.dealership.phone}` : ""}
+        {s.dealership.email ? ` · ${s.dealership.email}` : ""}
         {s.dealership.licenceNumber ? ` · Dealer licence ${s.dealership.licenceNumber}` : ""}
       </p>
       <div>
@@ -70,7 +73,7 @@ export function KeySummary({ vehicle, locale }: { vehicle: PublicVehicle; locale
       ) : null}
 
       <p className="text-sm">
-        Report revision {vehicle.revision.number}, published {dateText(vehicle.revision.publishedAt, locale)}
+        Report revision {vehicle.revision.number}, published {publishedText(vehicle.revision.publishedAt, s.dealership)}
         {s.inspectedOn ? `, from the inspection on ${dateText(s.inspectedOn, locale)}` : ""}.
       </p>
       <ReportActions slug={vehicle.slug} />

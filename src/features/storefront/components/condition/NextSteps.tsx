@@ -79,7 +79,7 @@ export function Dealership({ snapshot: s }: { snapshot: PublicSnapshot }) {
 }
 
 /** Print this report and the window card. */
-export function ReportActions({ slug }: { slug: string }) {
+export function ReportActions({ slug, enquiryLink = true }: { slug: string; enquiryLink?: boolean }) {
   return (
     <div className="fr-actions flex flex-wrap gap-3 print:hidden">
       <button type="button" onClick={() => window.print()} className={`${button} border-line-strong bg-paper-raised text-ink hover:border-ink`}>
@@ -88,9 +88,11 @@ export function ReportActions({ slug }: { slug: string }) {
       <Link to={`/vehicles/${encodeURIComponent(slug)}/card`} className={`${button} border-line-strong bg-paper-raised text-ink hover:border-ink`}>
         Window card
       </Link>
-      <a href="#enquiry" className={`${button} border-transparent text-signal hover:bg-signal-wash`}>
-        Ask about this vehicle
-      </a>
+      {enquiryLink ? (
+        <a href="#enquiry" className={`${button} border-transparent px-2 text-signal hover:bg-signal-wash`}>
+          Ask about this vehicle
+        </a>
+      ) : null}
     </div>
   );
 }

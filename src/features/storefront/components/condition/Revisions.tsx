@@ -1,10 +1,11 @@
 import { Link } from "react-router";
 import type { RevisionSummary } from "../../../../../shared/schemas/public.ts";
-import { dateText } from "../../format.ts";
+import type { PublicDealership } from "../../../../../shared/schemas/dealership.ts";
+import { publishedText } from "../../format.ts";
 import { Section } from "./Section.tsx";
 
 /** Every published revision, newest first, with what changed; each older one stays readable as it was. */
-export function Revisions({ slug, revisions, viewing, latest, locale }: { slug: string; revisions: RevisionSummary[]; viewing: number; latest: number; locale: string }) {
+export function Revisions({ slug, revisions, viewing, latest, dealership }: { slug: string; revisions: RevisionSummary[]; viewing: number; latest: number; dealership: PublicDealership }) {
   const list = [...revisions].sort((a, b) => b.number - a.number);
   return (
     <Section
@@ -19,7 +20,7 @@ export function Revisions({ slug, revisions, viewing, latest, locale }: { slug: 
             <li key={r.number} className={`rounded-lg border p-4 ${r.number === viewing ? "border-ink bg-paper-raised" : "border-line"}`}>
               <p className="flex flex-wrap items-baseline gap-x-3">
                 <strong className="figures">Revision {r.number}</strong>
-                <span>published {dateText(r.publishedAt, locale)}</span>
+                <span>published {publishedText(r.publishedAt, dealership)}</span>
                 {r.number === latest ? <span className="text-sm font-bold">· current</span> : null}
                 {r.number === viewing ? <span className="text-sm font-bold">· you are reading this one</span> : null}
               </p>

@@ -163,7 +163,7 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
     return (
       <div className="fr-spec-group min-w-0">
         <h3 className="text-lg font-bold">{title}</h3>
-        <dl className="mt-3 grid grid-cols-1 gap-x-6 gap-y-3 sm:grid-cols-2">
+        <dl className="mt-3 grid grid-cols-1 gap-x-6 gap-y-3 sm:grid-cols-2 lg:grid-cols-1">
           {shown.map(([name, value]) => (
             <Fact key={name} name={name}>
               {value}

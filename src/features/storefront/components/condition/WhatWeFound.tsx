@@ -150,7 +150,7 @@ function DefectMap({
     <div className="fr-map min-w-0">
       <h3 className="text-xl font-bold">Where they are</h3>
       <p className="mt-1 text-ink">
-        Each number on a photo matches the list. Press a number to pick its item.
+        Each number on a photo matches the list.<span className="print:hidden"> Press a number to pick its item.</span>
         {unpinned ? ` ${count(unpinned, "item is", "items are", locale)} not on a photo; the list describes ${unpinned === 1 ? "it" : "them"}.` : ""}
       </p>
       {entries.length === 0 ? <p className="mt-3 text-ink-soft">No item is pinned on a photo.</p> : null}
