@@ -15,6 +15,8 @@ import { photosRoutes } from "./modules/photos/photos.routes.ts";
 import { walkaroundRoutes } from "./modules/walkaround/walkaround.routes.ts";
 import { checksRoutes } from "./modules/checks/checks.routes.ts";
 import { publishingRoutes, publicVehiclesRoutes } from "./modules/publishing/publishing.routes.ts";
+import { enquiryRoutes, leadsRoutes, mailRoutes, shareRoutes } from "./modules/leads/leads.routes.ts";
+import { requireStaff } from "./middleware/authenticate.ts";
 import { pagesRoutes } from "./modules/publishing/pages.routes.ts";
 import { mediaRoutes } from "./modules/photos/media.routes.ts";
 import { clientRoutes } from "./modules/client/client.routes.ts";
@@ -76,10 +78,12 @@ export function createApp(ctx: AppContext): Express {
   api.use("/users", usersRoutes(ctx));
   api.use("/dealership", dealershipRoutes(ctx));
   api.use("/vehicles/:id/photos", photosRoutes(ctx));
-  api.use("/vehicles/:id", walkaroundRoutes(ctx), checksRoutes(ctx), publishingRoutes(ctx));
+  api.use("/vehicles/:id", walkaroundRoutes(ctx), checksRoutes(ctx), publishingRoutes(ctx), shareRoutes(ctx));
   api.use("/vehicles", vehiclesRoutes(ctx));
   api.use("/public/dealership", publicDealershipRoutes(ctx));
-  api.use("/public/vehicles", publicVehiclesRoutes(ctx));
+  api.use("/public/vehicles", publicVehiclesRoutes(ctx), enquiryRoutes(ctx));
+  api.use("/leads", requireStaff, leadsRoutes(ctx));
+  api.use("/mail", requireStaff, mailRoutes(ctx));
   api.use(apiNotFound);
   app.use("/api", api);
 

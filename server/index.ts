@@ -2,6 +2,7 @@ import { createServer } from "node:http";
 import { createApp } from "./app.ts";
 import { createContext } from "./lib/boot.ts";
 import { removeOrphans } from "./modules/photos/cleanup.ts";
+import { startFakeSmtp } from "./modules/mail/fake-smtp.ts";
 
 /** Process entry: config, database, listen, and a graceful shutdown that lets requests in flight finish. */
 export async function main() {
@@ -12,6 +13,9 @@ export async function main() {
   await new Promise<void>((resolve) => server.listen(ctx.config.PORT, ctx.config.HOST, resolve));
   ctx.logger.info({ url: ctx.config.publicUrl }, "Forthright is listening");
   ctx.photoWorker.start();
+  // Demo mode: our own mail catcher on loopback; production sends through the configured SMTP server only.
+  const fakeSmtp = ctx.config.demoMail ? await startFakeSmtp(ctx.database, ctx.config.FAKE_SMTP_PORT).catch((err) => (ctx.logger.warn({ err: err.message }, "demo mail catcher not started (port in use?); mail waits in the outbox"), null)) : null;
+  ctx.mail.start();
   const cleanup = () =>
     removeOrphans(ctx.database, ctx.storage, ctx.uploadsDir)
       .then((removed) => removed.length && ctx.logger.info({ removed: removed.length }, "removed orphaned files"))
@@ -28,6 +32,8 @@ export async function main() {
     force.unref();
     server.close(async () => {
       await ctx.photoWorker.stop().catch(() => undefined);
+      await ctx.mail.stop().catch(() => undefined);
+      await fakeSmtp?.close().catch(() => undefined);
       await ctx.database.close().catch(() => undefined);
       process.exit(0);
     });

@@ -16,9 +16,17 @@ export const configSchema = z.object({
   TRUST_PROXY: bool.default(false),
   UPLOADS_DIR: z.string().default("uploads"),
   SESSION_DAYS: z.coerce.number().int().min(1).max(90).default(30),
+  /** Outgoing mail. Without SMTP_HOST outside production, a local fake SMTP server captures every message. */
+  SMTP_HOST: z.string().optional(),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  SMTP_SECURE: bool.default(false),
+  MAIL_FROM: z.string().default("Forthright <no-reply@forthright.invalid>"),
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2526),
 });
 
-export type Config = z.infer<typeof configSchema> & { publicUrl: string; production: boolean };
+export type Config = z.infer<typeof configSchema> & { publicUrl: string; production: boolean; demoMail: boolean };
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const parsed = configSchema.safeParse(env);
@@ -27,9 +35,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Configuration is not valid:\n${lines.join("\n")}`);
   }
   const c = parsed.data;
+  if (c.NODE_ENV === "production" && !c.SMTP_HOST) throw new Error("Configuration is not valid:\n  SMTP_HOST: required in production (mail is never faked there)");
   return {
     ...c,
     publicUrl: (c.PUBLIC_URL ?? `http://${c.HOST === "0.0.0.0" ? "127.0.0.1" : c.HOST}:${c.PORT}`).replace(/\/$/, ""),
     production: c.NODE_ENV === "production",
+    demoMail: c.NODE_ENV !== "production" && !c.SMTP_HOST,
   };
 }

@@ -9,6 +9,7 @@ import type { AppContext } from "./context.ts";
 import path from "node:path";
 import { localStorage } from "./storage.ts";
 import { PhotoWorker } from "../modules/photos/photo-worker.ts";
+import { MailSender } from "../modules/mail/outbox.ts";
 
 export function createLogger(config: Config): Logger {
   return pino({ level: config.LOG_LEVEL, redact: ["req.headers.cookie", "req.headers.authorization"] });
@@ -61,6 +62,14 @@ export async function createContext(options: BootOptions = {}): Promise<AppConte
     storage,
     uploadsDir,
     photoWorker: new PhotoWorker(database, storage, logger),
+    mail: new MailSender(
+      database,
+      config.demoMail
+        ? { host: "127.0.0.1", port: config.FAKE_SMTP_PORT, secure: false, from: config.MAIL_FROM }
+        : { host: config.SMTP_HOST!, port: config.SMTP_PORT, secure: config.SMTP_SECURE, user: config.SMTP_USER, pass: config.SMTP_PASS, from: config.MAIL_FROM },
+      logger,
+      options.now,
+    ),
     now: options.now ?? (() => new Date()),
   };
   await checkDurability(ctx);

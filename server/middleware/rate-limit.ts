@@ -10,11 +10,19 @@ export interface LimitSpec {
 export interface LimitSettings {
   signInPerAddress: LimitSpec;
   signInPerAccount: LimitSpec;
+  enquiryPerAddress: LimitSpec;
+  enquiryPerVehicle: LimitSpec;
+  resetPerAddress: LimitSpec;
+  resetPerAccount: LimitSpec;
 }
 
 export const defaultLimits: LimitSettings = {
   signInPerAddress: { points: 30, durationSeconds: 15 * 60 },
   signInPerAccount: { points: 8, durationSeconds: 15 * 60 },
+  enquiryPerAddress: { points: 5, durationSeconds: 10 * 60 },
+  enquiryPerVehicle: { points: 30, durationSeconds: 60 * 60 },
+  resetPerAddress: { points: 10, durationSeconds: 15 * 60 },
+  resetPerAccount: { points: 3, durationSeconds: 60 * 60 },
 };
 
 export type Limiter = RateLimiterMySQL;
@@ -41,6 +49,10 @@ export function createLimiters(pool: PromisePool, database: string, settings: Li
   return {
     signInPerAddress: make("sign_in_ip", settings.signInPerAddress),
     signInPerAccount: make("sign_in_account", settings.signInPerAccount),
+    enquiryPerAddress: make("enquiry_ip", settings.enquiryPerAddress),
+    enquiryPerVehicle: make("enquiry_vehicle", settings.enquiryPerVehicle),
+    resetPerAddress: make("reset_ip", settings.resetPerAddress),
+    resetPerAccount: make("reset_account", settings.resetPerAccount),
   };
 }
 

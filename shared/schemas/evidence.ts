@@ -38,7 +38,7 @@ const depth = (label: string) =>
     .number({ error: `${label} must be a number of millimetres.` })
     .min(0, `${label} cannot be negative.`)
     .max(30, `${label} is at most 30 mm.`)
-    .refine((v) => Math.abs(v * 10 - Math.round(v * 10)) < 1e-9, `${label}: one decimal place, like 4.5.`)
+    .refine((v) => Math.abs(v * 10 - Math.round(v * 10)) < 1e-9, `${label} to 1 decimal place, like 4.9.`)
     .nullable()
     .optional();
 

@@ -13,6 +13,9 @@ export const routes: RouteObject[] = [
     hydrateFallbackElement: <Loading />,
     children: [
       { path: "/", ...page(() => import("./routes/storefront.tsx")) },
+      { path: "/vehicles/:slug", ...page(() => import("./routes/public-vehicle.tsx")) },
+      { path: "/vehicles/:slug/revisions/:number", ...page(() => import("./routes/public-vehicle.tsx")) },
+      { path: "/vehicles/:slug/card", ...page(() => import("./routes/window-card.tsx")) },
       { path: "/sign-in", ...page(() => import("./routes/sign-in.tsx")) },
       {
         path: "/app",

@@ -1,10 +1,15 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD, startTestApp, type TestApp } from "../support/app.ts";
+import { defaultLimits } from "../../server/middleware/rate-limit.ts";
 
 let t: TestApp;
 beforeAll(async () => {
   t = await startTestApp({
-    limits: { signInPerAddress: { points: 6, durationSeconds: 600 }, signInPerAccount: { points: 3, durationSeconds: 600 } },
+    limits: {
+      ...defaultLimits,
+      signInPerAddress: { points: 6, durationSeconds: 600 },
+      signInPerAccount: { points: 3, durationSeconds: 600 },
+    },
   });
 });
 afterAll(() => t.close());

@@ -124,7 +124,7 @@ describe("tyres and checks on a phone in Chromium", () => {
     expect(saved).toMatch(/must be repaired before sale for road use/);
     expect(saved).toMatch(/Publishing is blocked until then/);
     expect(saved).toMatch(/Brakes failed\. The vehicle must be repaired before it is sold for road use/);
-    expect(saved).toMatch(/Rear left tyre: 1\.4 mm at its shallowest, below the legal minimum/);
+    expect(saved).toMatch(/Rear left tyre: 1\.4\s?mm at its shallowest, below the legal minimum/);
     // Several advisories fold under one line that says what to do; opened, they name each tyre.
     await cautions.getByText(/4 advisories: tell the buyer/).click();
     expect(await cautions.innerText()).toMatch(/Rear left tyre is 11 years old/);

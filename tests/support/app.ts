@@ -24,9 +24,14 @@ export interface TestApp {
   close: () => Promise<void>;
 }
 
+const lots = { points: 1000, durationSeconds: 900 };
 const generous: LimitSettings = {
-  signInPerAddress: { points: 1000, durationSeconds: 900 },
-  signInPerAccount: { points: 1000, durationSeconds: 900 },
+  signInPerAddress: lots,
+  signInPerAccount: lots,
+  enquiryPerAddress: lots,
+  enquiryPerVehicle: lots,
+  resetPerAddress: lots,
+  resetPerAccount: lots,
 };
 
 /** createApp() on its own database, seeded with the demo dealership and its four staff. */

@@ -11,3 +11,6 @@ export * from "./walkaround.ts";
 export * from "./tyres.ts";
 export * from "./checks.ts";
 export * from "./revisions.ts";
+export * from "./leads.ts";
+export * from "./mail.ts";
+export * from "./feeds.ts";

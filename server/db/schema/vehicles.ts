@@ -59,6 +59,8 @@ export const vehicles = mysqlTable(
     /** Versions of the evidence sets, apart from the record's own, so the workshop and sales do not collide. */
     tyresVersion: int().notNull().default(0),
     checksVersion: int().notNull().default(0),
+    /** The salesperson who answers enquiries about this vehicle; the dealership's inbox when null. */
+    salespersonId: varchar({ length: 255 }),
     /** The public address, fixed at the first publish; null until then. */
     publicSlug: varchar({ length: 120 }).unique(),
     /** The newest published revision (the public page); null until the first publish. */

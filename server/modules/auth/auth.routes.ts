@@ -5,6 +5,8 @@ import { validate } from "../../middleware/validate.ts";
 import { signInSchema, type SignInInput } from "../../../shared/schemas/auth.ts";
 import { signIn } from "./auth.service.ts";
 import { presentSessionUser } from "../users/users.presenter.ts";
+import { resetRequestSchema, tokenPasswordSchema } from "../../../shared/schemas/enquiries.ts";
+import * as tokens from "./tokens.service.ts";
 
 export function authRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -19,6 +21,27 @@ export function authRoutes(ctx: AppContext): Router {
     await ctx.auth.invalidateSession(res.locals.auth!.session.id);
     res.append("Set-Cookie", ctx.auth.createBlankSessionCookie().serialize());
     res.json({ ok: true });
+  });
+
+  router.post("/password-reset", validate("body", resetRequestSchema), async (req, res) => {
+    res.json(await tokens.requestReset(ctx, (res.locals.body as { email: string }).email, req.ip ?? "unknown"));
+  });
+
+  router.post("/password-reset/confirm", validate("body", tokenPasswordSchema), async (_req, res) => {
+    const { token, password } = res.locals.body as { token: string; password: string };
+    res.json(await tokens.confirmReset(ctx, token, password));
+  });
+
+  router.get("/invitations/:token", async (req, res) => {
+    res.json({ invitation: await tokens.inspectInvite(ctx, String(req.params.token)) });
+  });
+
+  router.post("/invitations/accept", validate("body", tokenPasswordSchema), async (_req, res) => {
+    const { token, password } = res.locals.body as { token: string; password: string };
+    const session = await tokens.acceptInvite(ctx, token, password);
+    res.append("Set-Cookie", ctx.auth.createSessionCookie(session.id).serialize());
+    const { user } = await ctx.auth.validateSession(session.id);
+    res.status(201).json({ user: user ? presentSessionUser(user) : null });
   });
 
   router.get("/session", (_req, res) => {

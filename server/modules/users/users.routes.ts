@@ -5,6 +5,8 @@ import { validate } from "../../middleware/validate.ts";
 import { createUserSchema, updateUserSchema, type CreateUserInput, type UpdateUserInput } from "../../../shared/schemas/users.ts";
 import { idParamSchema } from "../../../shared/schemas/common.ts";
 import * as service from "./users.service.ts";
+import * as tokens from "../auth/tokens.service.ts";
+import { inviteSchema } from "../../../shared/schemas/enquiries.ts";
 
 export function usersRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -17,6 +19,10 @@ export function usersRoutes(ctx: AppContext): Router {
   router.post("/", validate("body", createUserSchema), async (_req, res) => {
     const user = await service.create(ctx, currentUser(res.locals), res.locals.body as CreateUserInput);
     res.status(201).json({ user });
+  });
+
+  router.post("/invite", validate("body", inviteSchema), async (_req, res) => {
+    res.status(201).json(await tokens.invite(ctx, currentUser(res.locals), res.locals.body as never));
   });
 
   router.patch("/:id", validate("params", idParamSchema), validate("body", updateUserSchema), async (_req, res) => {

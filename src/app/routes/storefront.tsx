@@ -69,7 +69,7 @@ export default function Storefront() {
           </button>
         </form>
 
-        <div className="mt-6 grid gap-6 lg:grid-cols-[15rem_1fr] lg:items-start">
+        <div className="mt-6 grid grid-cols-1 gap-6 lg:grid-cols-[15rem_minmax(0,1fr)] lg:items-start">
           <StockFilterPanel filters={filters} facets={data?.facets ?? null} dealership={dealership} onChange={change} />
 
           <section aria-labelledby="results-heading" className="min-w-0">

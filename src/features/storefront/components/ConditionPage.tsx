@@ -44,7 +44,7 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
       ) : null}
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8">
         <article aria-labelledby="vehicle-title" className="flex flex-col gap-10">
-          <div className="fr-top grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] lg:items-start lg:gap-10">
+          <div className="fr-top grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] lg:items-start lg:gap-10">
             <KeySummary vehicle={vehicle} locale={locale} />
             <Gallery photos={s.photos} title={s.title} locale={locale} />
           </div>
@@ -53,7 +53,7 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
           <Cautions cautions={s.cautions} />
           <Specifications snapshot={s} locale={locale} />
           {/* Two columns where it helps on a wide screen; one after the other, in this order, on a phone and on paper. */}
-          <div className="fr-pair grid gap-10 lg:grid-cols-2">
+          <div className="fr-pair grid grid-cols-1 gap-10 lg:grid-cols-2">
             <ServiceHistory snapshot={s} locale={locale} />
             {s.descriptionHtml.trim() ? (
               <Section id="listing" title="About this vehicle" className="fr-listing">
@@ -61,11 +61,11 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
               </Section>
             ) : null}
           </div>
-          <div className="fr-pair grid gap-10 lg:grid-cols-2">
+          <div className="fr-pair grid grid-cols-1 gap-10 lg:grid-cols-2">
             <Revisions slug={vehicle.slug} revisions={vehicle.revisions.length ? vehicle.revisions : [vehicle.revision]} viewing={vehicle.revision.number} latest={latest} dealership={s.dealership} />
             <Dealership snapshot={s} />
           </div>
-          <div className="fr-pair grid gap-10 lg:grid-cols-2">
+          <div className="fr-pair grid grid-cols-1 gap-10 lg:grid-cols-2">
             <AboutReport snapshot={s} revision={vehicle.revision.number} publishedAt={vehicle.revision.publishedAt} locale={locale} />
             <Enquiry snapshot={s} status={vehicle.status} />
           </div>

@@ -31,7 +31,7 @@ export function SiteHeader({ dealership, children }: { dealership: PublicDealers
 export function SiteFooter({ dealership }: { dealership: PublicDealership | null }) {
   return (
     <footer className="mt-16 border-t border-line bg-paper-raised print:hidden">
-      <div className="mx-auto grid max-w-6xl gap-4 px-4 py-8 text-sm sm:grid-cols-[1fr_auto] sm:px-6">
+      <div className="mx-auto grid max-w-6xl grid-cols-1 gap-4 px-4 py-8 text-sm sm:grid-cols-[1fr_auto] sm:px-6">
         {dealership ? (
           <address className="not-italic text-ink">
             <strong>{dealership.name}</strong>

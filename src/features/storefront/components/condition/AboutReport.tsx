@@ -9,7 +9,8 @@ export function AboutReport({ snapshot: s, revision, publishedAt, locale }: { sn
   return (
     <Section id="about-report" title="About this report">
       <div className="fr-about flex max-w-prose flex-col gap-3">
-        <p>
+        {/* The top of the printed report already says this. */}
+        <p className="print:hidden">
           {inspected ? <>This is revision {revision} of the report, published on {publishedText(publishedAt, s.dealership)}, from the inspection on {inspected}</> : <>This is revision {revision} of the report, published on {publishedText(publishedAt, s.dealership)}</>}
           {s.inspectedBy ? <> by {s.inspectedBy}</> : null}. A published revision is never changed afterwards.
         </p>

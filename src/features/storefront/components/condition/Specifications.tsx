@@ -176,7 +176,7 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
 
   return (
     <Section id="specification" title="Specification">
-      <div className="fr-spec grid gap-8 lg:grid-cols-3">
+      <div className="fr-spec grid grid-cols-1 gap-8 lg:grid-cols-3">
         {group("The vehicle", vehicle)}
         {group("Engine and drive", engine)}
         {group("Economy and range", economy)}

@@ -19,7 +19,7 @@ export function TyresAndChecks({ snapshot, locale }: { snapshot: PublicSnapshot;
   const checkDates = [...new Set(checks.map((c) => c.checkedOn).filter(Boolean))];
   return (
     <Section id="tyres-checks" title="Tyres and checks">
-      <div className="fr-tc-grid grid gap-8 lg:grid-cols-2">
+      <div className="fr-tc-grid grid grid-cols-1 gap-8 lg:grid-cols-2">
         <div className="fr-tyres min-w-0">
           <h3 className="text-xl font-bold">Tyres</h3>
           <p className="mt-1">
@@ -30,11 +30,14 @@ export function TyresAndChecks({ snapshot, locale }: { snapshot: PublicSnapshot;
           {readings.length === 0 ? (
             <p className="mt-3 rounded-md border-l-4 border-ochre bg-ochre-wash px-3 py-2">The tyres were not measured for this report. Ask us, or have them checked.</p>
           ) : (
-            <ul className="fr-tyre-grid mt-4 grid gap-3 sm:grid-cols-2">
-              {readings.map((t) => (
-                <TyreCard key={t.position} tyre={t} min={min} locale={locale} />
-              ))}
-            </ul>
+            <>
+              <ul className="fr-tyre-grid mt-4 grid gap-3 sm:grid-cols-2 print:hidden">
+                {readings.map((t) => (
+                  <TyreCard key={t.position} tyre={t} min={min} locale={locale} />
+                ))}
+              </ul>
+              <TyreTable readings={readings} min={min} locale={locale} />
+            </>
           )}
         </div>
         <div className="fr-checks min-w-0">
@@ -151,5 +154,50 @@ function TyreCard({ tyre: t, min, locale }: { tyre: PublicTyre; min: string | nu
         ) : null}
       </dl>
     </li>
+  );
+}
+
+/** On paper the same readings as one compact table (the cards above are for screens). */
+function TyreTable({ readings, min, locale }: { readings: PublicTyre[]; min: string | null; locale: string }) {
+  return (
+    <table className="fr-tyre-table mt-2 hidden w-full print:table">
+      <thead>
+        <tr>
+          <th scope="col">Tyre</th>
+          <th scope="col">Least tread</th>
+          <th scope="col">Tread left</th>
+          <th scope="col">Age</th>
+          <th scope="col">Size</th>
+        </tr>
+      </thead>
+      <tbody>
+        {readings.map((t) => {
+          const least = formatTreadDepth(t.leastTreadMm, { locale });
+          return (
+            <tr key={t.position}>
+              <th scope="row">{tyrePositionLabel(t.position)}</th>
+              <td>
+                <Qty text={least} missing="Not measured" />
+                {least && t.treadVerdict === "fail" ? (
+                  <strong>
+                    , below the <Qty text={min} /> legal minimum: replace before road use
+                  </strong>
+                ) : least && t.treadVerdict === "pass" ? (
+                  least === min ? ", at the legal minimum" : ", above the minimum"
+                ) : null}
+              </td>
+              <td>
+                <Qty text={formatPercent(t.remainingPercent, { locale })} />
+              </td>
+              <td>
+                {t.ageYears === null ? "Not known" : `${formatNumber(t.ageYears, { locale })} ${t.ageYears === 1 ? "year" : "years"}`}
+                {t.ageAdvisory === "strong" ? <strong>, replace or have it inspected</strong> : t.ageAdvisory === "advise" ? <strong>, have it checked</strong> : null}
+              </td>
+              <td>{t.size ?? "—"}</td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
   );
 }

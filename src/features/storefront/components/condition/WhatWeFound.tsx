@@ -58,7 +58,7 @@ export function WhatWeFound({ snapshot, locale }: { snapshot: PublicSnapshot; lo
         </p>
       }
     >
-      <div className="fr-found-head grid gap-5 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+      <div className="fr-found-head grid grid-cols-1 gap-5 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <ConditionIndex condition={condition} locale={locale} />
         <SeverityCounts condition={condition} defects={defects} locale={locale} />
       </div>
@@ -66,7 +66,7 @@ export function WhatWeFound({ snapshot, locale }: { snapshot: PublicSnapshot; lo
       {defects.length === 0 ? (
         <p className="mt-6 rounded-md border border-line bg-paper-raised p-4">We noted no items on this vehicle at the inspection.</p>
       ) : (
-        <div className="fr-found-grid mt-8 grid gap-8 lg:grid-cols-[minmax(0,7fr)_minmax(0,5fr)]">
+        <div className="fr-found-grid mt-8 grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,7fr)_minmax(0,5fr)]">
           <DefectMap photos={photos} defects={defects} selected={selected} onSelect={select} locale={locale} />
           <DefectList snapshot={snapshot} selected={selected} onShowPin={showPin} locale={locale} />
         </div>
