@@ -1,23 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startTestApp, type TestApp } from "../support/app.ts";
-import { launchBrowser } from "../support/browser.ts";
-import { listen } from "../support/http-server.ts";
+import { e2eWorld } from "../support/e2e.ts";
+import { describe, expect, it } from "vitest";
 import { publishReadyVehicle } from "../support/publishing.ts";
 
-let t: TestApp;
-let browser: Browser;
-let server: Awaited<ReturnType<typeof listen>>;
-beforeAll(async () => {
-  t = await startTestApp();
-  server = await listen(t.app);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  await t?.close();
-});
+const world = e2eWorld();
 
 // Hostile listing copy (common XSS payload shapes; common practice, no source). Each would set window.__pwned.
 const PAYLOADS = [
@@ -35,19 +20,19 @@ const PAYLOADS = [
 describe("listing copy on the public page", () => {
   it("when the copy is full of script payloads, then the condition page renders it as inert text in Chromium and nothing runs", async () => {
     const description = `A tidy wagon.\n\n${PAYLOADS.join("\n\n")}\n\n**Bold still works.**`;
-    const { slug } = await publishReadyVehicle(t, { description });
-    const page = await browser.newPage();
+    const { slug } = await publishReadyVehicle(world.t, { description });
+    const page = await world.browser.newPage();
     const dialogs: string[] = [];
     page.on("dialog", (d) => (dialogs.push(d.message()), d.dismiss()));
-    await page.goto(`${server.url}/vehicles/${slug}`, { waitUntil: "networkidle" });
-    await page.waitForSelector(".prose-copy strong");
+    await page.goto(`${world.url}/vehicles/${slug}`, { waitUntil: "networkidle" });
+    await page.locator(".prose-copy strong", { hasText: "Bold still works." }).waitFor();
     // Click every link in the copy: none may run script.
     for (const link of await page.locator(".prose-copy a").all()) await link.click({ trial: false }).catch(() => undefined);
     await page.waitForTimeout(300);
     expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
     expect(dialogs).toEqual([]);
     expect(await page.locator(".prose-copy script, .prose-copy img, .prose-copy iframe, .prose-copy svg, .prose-copy [onerror], .prose-copy [onload]").count()).toBe(0);
-    expect(await page.locator(".prose-copy strong").innerText()).toBe("Bold still works.");
+    expect(await page.locator(".prose-copy strong", { hasText: "Bold still works." }).count()).toBe(1);
     await page.close();
   });
 });

@@ -1,37 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { DEMO_PASSWORD, startTestApp, type TestApp } from "../support/app.ts";
-import { launchBrowser, screenshot, watchErrors } from "../support/browser.ts";
-import { listen } from "../support/http-server.ts";
+import { e2eWorld } from "../support/e2e.ts";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { screenshot, watchErrors } from "../support/browser.ts";
 
-let t: TestApp;
-let browser: Browser;
-let server: Awaited<ReturnType<typeof listen>>;
+const world = e2eWorld();
 
-beforeAll(async () => {
-  t = await startTestApp();
-  server = await listen(t.app);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  await t?.close();
-});
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL(`${server.url}/app`);
-}
+const signIn = (page: Page, email: string) => world.signIn(page, email);
 
 const figure = (page: Page, label: string) => page.locator("dt", { hasText: label }).locator("xpath=following-sibling::dd[1]");
 
 describe("stock entry in Chromium", () => {
   it("when sales enters a vehicle, then range and economy appear as the fields are filled, and the saved vehicle is found by VIN", async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    const page = await world.browser.newPage({ viewport: { width: 1366, height: 900 } });
     const errors = watchErrors(page);
     await signIn(page, "sales@demo.test");
     await page.getByRole("navigation", { name: "Staff" }).getByRole("link", { name: "Stock", exact: true }).click();
@@ -70,9 +50,9 @@ describe("stock entry in Chromium", () => {
   });
 
   it("when a field is wrong, then the form says which, keeps every value typed, and nothing is saved", async () => {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    const page = await world.browser.newPage({ viewport: { width: 1366, height: 900 } });
     await signIn(page, "sales@demo.test");
-    await page.goto(`${server.url}/app/vehicles/new`);
+    await page.goto(`${world.url}/app/vehicles/new`);
     await page.getByLabel("VIN").fill("1G4AH59HO5G118341");
     await page.getByLabel("Make").fill("Corvane");
     await page.getByLabel("Model", { exact: true }).fill("Pimlet");

@@ -1,42 +1,22 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { DEMO_PASSWORD, startTestApp, type TestApp } from "../support/app.ts";
-import { imagesSettled, launchBrowser, screenshot, watchErrors } from "../support/browser.ts";
-import { listen } from "../support/http-server.ts";
+import { e2eWorld } from "../support/e2e.ts";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { imagesSettled, screenshot, watchErrors } from "../support/browser.ts";
 import { dieselSuv } from "../support/vehicles.ts";
 import { renderDemoPhoto } from "../../server/db/seed/art/index.ts";
 
-let t: TestApp;
-let browser: Browser;
-let server: Awaited<ReturnType<typeof listen>>;
+const world = e2eWorld();
 
-beforeAll(async () => {
-  t = await startTestApp();
-  server = await listen(t.app);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  await t?.close();
-});
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL(`${server.url}/app`);
-}
+const signIn = (page: Page, email: string) => world.signIn(page, email);
 
 describe("the workshop's walk-around on a phone", () => {
   it("when the workshop uploads photos and pins a defect, then progress shows, the photos turn ready, and the numbered pin matches the list", async () => {
-    const sales = await t.signIn("sales");
+    const sales = await world.t.signIn("sales");
     const v = (await sales.post("/api/vehicles").send(dieselSuv())).body.vehicle;
-    const page = await browser.newPage({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 1 });
+    const page = await world.browser.newPage({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 1 });
     const errors = watchErrors(page);
     await signIn(page, "workshop@demo.test");
-    await page.goto(`${server.url}/app/vehicles/${v.id}/photos`);
+    await page.goto(`${world.url}/app/vehicles/${v.id}/photos`);
     const files = await Promise.all(
       (["side_left", "front_left", "rear_right"] as const).map(async (angle, i) => ({
         name: `${angle}.jpg`,
@@ -74,7 +54,7 @@ describe("the workshop's walk-around on a phone", () => {
     await page.getByRole("button", { name: /^Roof/ }).click();
     await page.getByRole("button", { name: "Nothing found here" }).click();
     await expect.poll(async () => page.getByRole("button", { name: /^Roof/ }).innerText()).toMatch(/Nothing found/);
-    const zones = (await (await t.signIn("workshop")).get(`/api/vehicles/${v.id}/walkaround`)).body.zones;
+    const zones = (await (await world.t.signIn("workshop")).get(`/api/vehicles/${v.id}/walkaround`)).body.zones;
     expect(zones.find((z: { zone: string }) => z.zone === "roof").state).toBe("nothing_found");
     expect(zones.find((z: { zone: string }) => z.zone === "left_side").state).toBe("defects");
     // The one refused file is answered 415 on purpose; Chromium logs that as a console error.

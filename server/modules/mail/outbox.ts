@@ -3,6 +3,7 @@ import nodemailer, { type Transporter } from "nodemailer";
 import type { Logger } from "pino";
 import type { Database, DbOrTx } from "../../db/client.ts";
 import { outbox } from "../../db/schema/index.ts";
+import { BackgroundLoop } from "../../lib/background-loop.ts";
 
 export interface Mail {
   to: string;
@@ -35,21 +36,17 @@ const GIVE_UP_AFTER = 24 * 60 * 60 * 1000;
  * Sends what the outbox holds, oldest first. The table is the queue, so a crash or an SMTP outage loses nothing
  * and any instance may send; a row lock (SKIP LOCKED) keeps two instances from sending the same mail.
  */
-export class MailSender {
+export class MailSender extends BackgroundLoop {
   private transport: Transporter;
-  private running = false;
-  private again = false;
-  private stopped = false;
-  private idle: Promise<void> = Promise.resolve();
-  private timer: NodeJS.Timeout | null = null;
 
   constructor(
     private readonly database: Database,
     private settings: SmtpSettings,
     private readonly logger: Logger,
     private readonly now: () => Date = () => new Date(),
-    private readonly pollMs = 5000,
+    pollMs = 5000,
   ) {
+    super(pollMs);
     this.transport = this.makeTransport();
   }
 
@@ -73,41 +70,12 @@ export class MailSender {
     this.transport = this.makeTransport();
   }
 
-  start() {
-    this.kick();
-    this.timer = setInterval(() => this.kick(), this.pollMs);
-    this.timer.unref();
-  }
-
-  kick() {
-    if (this.stopped) return;
-    if (this.running) {
-      this.again = true;
-      return;
-    }
-    this.running = true;
-    this.idle = this.drain().finally(() => {
-      this.running = false;
-      if (this.again && !this.stopped) {
-        this.again = false;
-        this.kick();
-      }
-    });
-  }
-
-  async settled() {
-    do await this.idle;
-    while (this.running);
-  }
-
-  async stop() {
-    this.stopped = true;
-    if (this.timer) clearInterval(this.timer);
-    await this.idle;
+  override async stop() {
+    await super.stop();
     this.transport.close();
   }
 
-  private async drain() {
+  protected async drain() {
     for (let round = 0; round < 100 && !this.stopped; round++) {
       const sent = await this.sendOne().catch((err) => {
         this.logger.error({ err }, "outbox pass failed");

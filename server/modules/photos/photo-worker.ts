@@ -5,62 +5,24 @@ import { photos } from "../../db/schema/index.ts";
 import type { Storage } from "../../lib/storage.ts";
 import { makeVariants } from "./photo-pipeline.ts";
 import { processingPhotos } from "./photos.queries.ts";
+import { BackgroundLoop } from "../../lib/background-loop.ts";
 
 /**
  * Makes the served variants of uploaded photos, one at a time, off the request path. The queue is the photos
  * table itself (status "processing"), so work survives a crash and any instance can pick it up; a named lock per
  * photo keeps two instances from doing the same one.
  */
-export class PhotoWorker {
-  private running = false;
-  private again = false;
-  private stopped = false;
-  private idle: Promise<void> = Promise.resolve();
-  private timer: NodeJS.Timeout | null = null;
-
+export class PhotoWorker extends BackgroundLoop {
   constructor(
     private readonly database: Database,
     private readonly storage: Storage,
     private readonly logger: Logger,
-    private readonly pollMs = 5000,
-  ) {}
-
-  start() {
-    this.kick();
-    this.timer = setInterval(() => this.kick(), this.pollMs);
-    this.timer.unref();
+    pollMs = 5000,
+  ) {
+    super(pollMs);
   }
 
-  /** Ask for a pass soon; cheap to call after every upload. */
-  kick() {
-    if (this.stopped) return;
-    if (this.running) {
-      this.again = true;
-      return;
-    }
-    this.running = true;
-    this.idle = this.drain().finally(() => {
-      this.running = false;
-      if (this.again && !this.stopped) {
-        this.again = false;
-        this.kick();
-      }
-    });
-  }
-
-  /** Resolves when no work is in progress: tests and shutdown wait on it. */
-  async settled() {
-    do await this.idle;
-    while (this.running);
-  }
-
-  async stop() {
-    this.stopped = true;
-    if (this.timer) clearInterval(this.timer);
-    await this.idle;
-  }
-
-  private async drain() {
+  protected async drain() {
     // Photos another instance holds are left to it for this pass.
     const skipped = new Set<number>();
     for (;;) {

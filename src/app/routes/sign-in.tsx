@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from "react";
-import { Navigate, useNavigate, useSearchParams } from "react-router";
+import { Link, Navigate, useNavigate, useSearchParams } from "react-router";
 import { useSession, useSignIn } from "../../lib/auth.ts";
 import { isApiError } from "../../lib/api-client.ts";
 import { TextField } from "../../components/form/Field.tsx";
@@ -65,7 +65,7 @@ export default function SignIn() {
           Sign in
         </Button>
       </form>
-      <p className="mt-8 text-sm text-ink-soft">Forgotten your password? Ask an admin to set a new one for you.</p>
+      <p className="mt-8 text-sm text-ink-soft"><Link to="/forgot-password">Forgotten your password?</Link> We will e-mail you a link to choose a new one.</p>
     </main>
   );
 }
