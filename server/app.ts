@@ -17,6 +17,8 @@ import { checksRoutes } from "./modules/checks/checks.routes.ts";
 import { publishingRoutes, publicVehiclesRoutes } from "./modules/publishing/publishing.routes.ts";
 import { enquiryRoutes, leadsRoutes, mailRoutes, shareRoutes } from "./modules/leads/leads.routes.ts";
 import { requireStaff } from "./middleware/authenticate.ts";
+import { feedsRoutes } from "./modules/feeds/feeds.routes.ts";
+import { feedsPublicRoutes } from "./modules/feeds/feeds.public.routes.ts";
 import { pagesRoutes } from "./modules/publishing/pages.routes.ts";
 import { mediaRoutes } from "./modules/photos/media.routes.ts";
 import { clientRoutes } from "./modules/client/client.routes.ts";
@@ -84,11 +86,13 @@ export function createApp(ctx: AppContext): Express {
   api.use("/public/vehicles", publicVehiclesRoutes(ctx), enquiryRoutes(ctx));
   api.use("/leads", requireStaff, leadsRoutes(ctx));
   api.use("/mail", requireStaff, mailRoutes(ctx));
+  api.use("/feeds", feedsRoutes(ctx));
   api.use(apiNotFound);
   app.use("/api", api);
 
   app.use(mediaRoutes(ctx));
   app.use(pagesRoutes(ctx));
+  app.use(feedsPublicRoutes(ctx));
   app.use(clientRoutes(ctx));
   app.use(errorHandler);
   return app;

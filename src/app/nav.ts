@@ -13,8 +13,11 @@ const everyone = ["admin", "sales", "workshop", "marketing"] as const;
 export const NAV: NavItem[] = [
   { to: "/app", label: "Overview", roles: everyone, end: true },
   { to: "/app/vehicles", label: "Stock", roles: everyone },
+  { to: "/app/leads", label: "Enquiries", roles: ["admin", "sales", "marketing"] },
+  { to: "/app/feeds", label: "Feeds", roles: ["admin", "marketing"] },
   { to: "/app/users", label: "Staff", roles: ["admin"] },
   { to: "/app/settings", label: "Dealership", roles: ["admin"] },
+  { to: "/app/mail", label: "Mail", roles: ["admin"] },
 ];
 
 export const navFor = (role: Role) => NAV.filter((item) => item.roles.includes(role));

@@ -22,7 +22,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { createServer, request as httpRequest, type IncomingHttpHeaders, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
-import { tmpdir } from "node:os";
+import { cpus, loadavg, tmpdir } from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { gzipSync } from "node:zlib";
@@ -35,6 +35,7 @@ import { createContext } from "../../server/lib/boot.ts";
 import { createApp } from "../../server/app.ts";
 import type { AppContext } from "../../server/lib/context.ts";
 import { DEMO_USERS, seedDemo } from "../../server/db/seed/demo.ts";
+import { getPublic } from "../../server/modules/publishing/public.service.ts";
 import { defaultLimits, type LimitSettings } from "../../server/middleware/rate-limit.ts";
 import type { TestApp } from "../support/app.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
@@ -126,6 +127,48 @@ function rawGet(url: string, headers: Record<string, string>): Promise<{ status:
     req.on("error", reject);
     req.end();
   });
+}
+
+/** CPU time (ms) a process has used, from /proc (Linux); undefined where that cannot be read. */
+function procCpuMs(pid: number): number | undefined {
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+    const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100; // utime + stime, in USER_HZ (100 on Linux)
+  } catch {
+    return undefined;
+  }
+}
+
+/** The pid of this run's MariaDB (the one listening on the database URL's port), to see where the CPU goes. */
+function mariadbPid(databaseUrl: string): number | undefined {
+  const port = new URL(databaseUrl).port;
+  try {
+    for (const entry of readdirSync("/proc")) {
+      if (!/^\d+$/.test(entry)) continue;
+      try {
+        const cmd = readFileSync(`/proc/${entry}/cmdline`, "utf8");
+        if (cmd.includes("mariadbd") && cmd.includes(`--port=${port}`)) return Number(entry);
+      } catch {
+        /* gone */
+      }
+    }
+  } catch {
+    /* no /proc */
+  }
+  return undefined;
+}
+
+/** Runs fn and reports the CPU this process and MariaDB used during it, as % of one core. */
+async function withCpu<T>(dbPid: number | undefined, fn: () => Promise<T>): Promise<{ result: T; nodePct: number; dbPct: number | undefined }> {
+  const t0 = performance.now();
+  const c0 = process.cpuUsage();
+  const d0 = dbPid ? procCpuMs(dbPid) : undefined;
+  const result = await fn();
+  const wall = performance.now() - t0;
+  const c = process.cpuUsage(c0);
+  const d1 = dbPid ? procCpuMs(dbPid) : undefined;
+  return { result, nodePct: ((c.user + c.system) / 1000 / wall) * 100, dbPct: d0 !== undefined && d1 !== undefined ? ((d1 - d0) / wall) * 100 : undefined };
 }
 
 // ---------------------------------------------------------------------------------------------------------------
@@ -225,7 +268,43 @@ async function cannon(url: string, seconds: number, children: Set<ChildProcess>)
   return r;
 }
 
-async function throughput(env: BenchEnv, base: string, slug: string, children: Set<ChildProcess>, servers: Server[]): Promise<BenchResult[]> {
+/** Where one request's time goes, one request at a time (diagnostic lines only): statements issued, service vs HTTP. */
+async function breakdown(env: BenchEnv, ctx: AppContext, route: string, slug: string) {
+  const pool = ctx.database.pool as unknown as Record<"query" | "execute", (...args: unknown[]) => unknown>;
+  const statements: string[] = [];
+  const real = { query: pool.query, execute: pool.execute };
+  for (const k of ["query", "execute"] as const) {
+    pool[k] = function (this: unknown, ...args: unknown[]) {
+      const first = args[0] as string | { sql: string };
+      statements.push(typeof first === "string" ? first : first.sql);
+      return real[k].apply(this, args);
+    };
+  }
+  try {
+    await (await fetch(route)).arrayBuffer();
+  } finally {
+    pool.query = real.query;
+    pool.execute = real.execute;
+  }
+  const N = 200;
+  const service: number[] = [];
+  const http: number[] = [];
+  for (let i = 0; i < N; i++) {
+    let t0 = performance.now();
+    JSON.stringify({ vehicle: await getPublic(ctx, slug) });
+    service.push(performance.now() - t0);
+    t0 = performance.now();
+    await (await fetch(route)).arrayBuffer();
+    http.push(performance.now() - t0);
+  }
+  env.log(
+    `one request at a time (${N} each): getPublic() + JSON.stringify in-process p50 ${median(service).toFixed(2)} ms, the route over HTTP p50 ${median(http).toFixed(2)} ms; ` +
+      `${statements.length} SQL statements per request:`,
+  );
+  for (const q of statements) env.log(`    ${q.length > 160 ? q.slice(0, 157) + "…" : q}`);
+}
+
+async function throughput(env: BenchEnv, ctx: AppContext, base: string, slug: string, databaseUrl: string, children: Set<ChildProcess>, servers: Server[]): Promise<BenchResult[]> {
   const route = `${base}/api/public/vehicles/${slug}`;
   const plain = await rawGet(route, {});
   if (plain.status !== 200) throw new Error(`GET ${route}: ${plain.status} ${plain.body.toString().slice(0, 300)}`);
@@ -251,19 +330,25 @@ async function throughput(env: BenchEnv, base: string, slug: string, children: S
   const headerBytes = (h: IncomingHttpHeaders) => Object.entries(h).reduce((s, [k, v]) => s + k.length + String(v).length + 4, 0);
   env.log(`response headers: app ≈ ${headerBytes(plain.headers)} bytes (helmet, request id, cache-control…), plain ≈ ${headerBytes(check.headers)} bytes`);
 
+  env.log(`load average ${loadavg().map((l) => l.toFixed(2)).join(" ")} on ${cpus().length} cores (the machine is shared; the interleaving is what keeps the ratio fair)`);
   env.log(`autocannon: ${CONNECTIONS} connections; warm-up ${WARMUP_SECONDS} s each, then app / plain / app / plain, ${SECONDS} s each`);
   await cannon(route, WARMUP_SECONDS, children);
   await cannon(refBase, WARMUP_SECONDS, children);
   const app: CannonRun[] = [];
   const ref: CannonRun[] = [];
+  const dbPid = mariadbPid(databaseUrl);
+  const cpu = (r: { nodePct: number; dbPct: number | undefined }) => `; CPU: this process ${r.nodePct.toFixed(0)}%${r.dbPct !== undefined ? `, MariaDB ${r.dbPct.toFixed(0)}%` : ""} of a core`;
   for (let i = 0; i < 2; i++) {
-    const a = await cannon(route, SECONDS, children);
+    const ra = await withCpu(dbPid, () => cannon(route, SECONDS, children));
+    const a = ra.result;
     app.push(a);
-    env.log(`  app   run ${i + 1}: ${a.requests.average.toFixed(0)} req/s, p50 ${a.latency.p50} ms, p99 ${a.latency.p99} ms, ${(a.throughput.total / a.requests.total).toFixed(0)} bytes/response`);
-    const b = await cannon(refBase, SECONDS, children);
+    env.log(`  app   run ${i + 1}: ${a.requests.average.toFixed(0)} req/s, p50 ${a.latency.p50} ms, p99 ${a.latency.p99} ms, ${(a.throughput.total / a.requests.total).toFixed(0)} bytes/response${cpu(ra)}`);
+    const rb = await withCpu(dbPid, () => cannon(refBase, SECONDS, children));
+    const b = rb.result;
     ref.push(b);
-    env.log(`  plain run ${i + 1}: ${b.requests.average.toFixed(0)} req/s, p50 ${b.latency.p50} ms, p99 ${b.latency.p99} ms, ${(b.throughput.total / b.requests.total).toFixed(0)} bytes/response`);
+    env.log(`  plain run ${i + 1}: ${b.requests.average.toFixed(0)} req/s, p50 ${b.latency.p50} ms, p99 ${b.latency.p99} ms, ${(b.throughput.total / b.requests.total).toFixed(0)} bytes/response${cpu(rb)}`);
   }
+  await breakdown(env, ctx, route, slug);
   const mean = (runs: CannonRun[], f: (r: CannonRun) => number) => runs.reduce((s, r) => s + f(r), 0) / runs.length;
   const seconds = SECONDS * 2;
   return [
@@ -444,8 +529,12 @@ async function lighthouseFigures(env: BenchEnv, url: string, base: string, child
     for (let i = 0; i < LIGHTHOUSE_RUNS; i++) {
       const out = path.join(tmp, `lhr-${i}.json`);
       const t0 = performance.now();
-      const { code, stderr } = await runNode([script, url, String(chrome.port), out], LIGHTHOUSE_TIMEOUT_MS, children);
+      const { code, stdout, stderr } = await runNode([script, url, String(chrome.port), out], LIGHTHOUSE_TIMEOUT_MS, children);
       if (code !== 0 || !existsSync(out)) throw new Error(`lighthouse run ${i + 1} exited ${code}: ${stderr.slice(-2000)}`);
+      if (i === 0) {
+        const patched = (JSON.parse(stdout.trim().split("\n").pop() || "{}") as { patchedTraceEvents?: number }).patchedTraceEvents ?? 0;
+        env.log(`trace shim (lighthouse-run.mjs): ${patched} PipelineReporter events renamed frame_reporter → chrome_frame_reporter for Lighthouse 12.2.3's trace engine`);
+      }
       const lhr = JSON.parse(readFileSync(out, "utf8")) as Lhr;
       runs.push(lhr);
       const m = (id: string) => lhr.audits[id]?.numericValue ?? Number.NaN;
@@ -488,6 +577,13 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
   const browsers: Browser[] = [];
   const servers: Server[] = [];
   let ctx: AppContext | undefined;
+  // The harness exits straight away on SIGINT/SIGTERM, without waiting for this finally: leave nothing behind then either.
+  const onExit = () => {
+    for (const child of children) child.kill("SIGKILL");
+    rmSync(uploadsDir, { recursive: true, force: true });
+    rmSync(tmp, { recursive: true, force: true });
+  };
+  process.once("exit", onExit);
   try {
     // Listen first, so the app is configured with the address it is really served on (canonical URLs, Origin checks).
     const server = createServer();
@@ -509,11 +605,12 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
     env.log(`"${title}", ${json.vehicle.snapshot.photos.length} photos`);
 
     const results: BenchResult[] = [];
-    results.push(...(await throughput(env, base, slug, children, servers)));
+    results.push(...(await throughput(env, ctx, base, slug, database.url, children, servers)));
     results.push(...(await pageJavaScript(env, base, slug, title, browsers)));
     results.push(...(await lighthouseFigures(env, `${base}/vehicles/${slug}`, base, children, tmp)));
     return results;
   } finally {
+    process.removeListener("exit", onExit);
     for (const child of children) child.kill("SIGKILL");
     for (const b of browsers) await b.close().catch(() => undefined);
     for (const s of servers) await closeServer(s);

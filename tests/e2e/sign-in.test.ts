@@ -25,10 +25,10 @@ afterAll(async () => {
 });
 
 const expectedNav = {
-  admin: ["Overview", "Stock", "Staff", "Dealership"],
-  sales: ["Overview", "Stock"],
+  admin: ["Overview", "Stock", "Enquiries", "Feeds", "Staff", "Dealership", "Mail"],
+  sales: ["Overview", "Stock", "Enquiries"],
   workshop: ["Overview", "Stock"],
-  marketing: ["Overview", "Stock"],
+  marketing: ["Overview", "Stock", "Enquiries", "Feeds"],
 } as const;
 
 describe("signing in as each role in Chromium", () => {

@@ -138,6 +138,9 @@ describe("a buyer on the public pages", () => {
     expect(await page.getByRole("button", { name: "Next photo" }).isVisible()).toBe(false);
     expect(await enquiry.isVisible()).toBe(false);
     expect(await page.locator(".fr-print-footer").innerText()).toMatch(/\/vehicles\/.+ · Revision \d+, published /);
+    // What the browser's print does first: every photo is asked for (they load lazily on screen).
+    await page.evaluate(() => window.dispatchEvent(new Event("beforeprint")));
+    await expect.poll(() => page.evaluate(() => [...document.images].every((i) => i.loading === "eager"))).toBe(true);
     await screenshot(page, "condition-print");
     const report = await page.pdf({ preferCSSPageSize: true, printBackground: false });
     savePdf("condition-print", report);

@@ -132,16 +132,18 @@ export async function recentFetches(db: DbOrTx, feedIds: number[], per = 20) {
         ) t WHERE t.k <= ${per} ORDER BY at DESC, id DESC`,
   );
   const list = (rows as unknown as [Array<Record<string, unknown>>])[0];
+  // drizzle reads DATETIME through mysql2 as text in UTC.
+  const date = (v: unknown) => (v == null ? null : v instanceof Date ? v : new Date(`${String(v).replace(" ", "T")}Z`));
   return list.map((r) => ({
     id: Number(r.id),
     feedId: Number(r.feed_id),
-    at: r.at as Date,
+    at: date(r.at)!,
     ip: (r.ip as string | null) ?? null,
     userAgent: (r.user_agent as string | null) ?? null,
     rows: Number(r.rows),
     bytes: Number(r.bytes),
     status: Number(r.status),
-    since: (r.since as Date | null) ?? null,
+    since: date(r.since),
   }));
 }
 

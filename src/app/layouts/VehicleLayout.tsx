@@ -5,6 +5,7 @@ import { useVehicle, type VehicleView } from "../../features/vehicles/api/vehicl
 import { StatusActions } from "../../features/vehicles/components/StatusActions.tsx";
 import { StatusBadge } from "../../features/vehicles/components/StatusBadge.tsx";
 import { PublishPanel } from "../../features/publishing/components/PublishPanel.tsx";
+import { ShareVehicle } from "../../features/leads/components/ShareVehicle.tsx";
 import { ConditionSummary } from "../../features/vehicles/components/ConditionSummary.tsx";
 import { odometerText, priceText, vehicleTitle } from "../../features/vehicles/format.ts";
 import { Panel } from "../../components/ui/Page.tsx";
@@ -89,6 +90,11 @@ export default function VehicleLayout() {
           <Panel title="Publishing">
             <PublishPanel vehicle={vehicle} role={user.role} />
           </Panel>
+          {user.role === "admin" || user.role === "sales" ? (
+            <Panel title="Send to a buyer">
+              <ShareVehicle vehicleId={vehicle.id} published={Boolean(vehicle.publishing.url) && (vehicle.status === "live" || vehicle.status === "reserved")} />
+            </Panel>
+          ) : null}
           <Panel title="Status">
             <StatusActions vehicle={vehicle} role={user.role} />
           </Panel>

@@ -27,6 +27,9 @@ export default function StaffOverview() {
 
 const DESCRIPTIONS: Record<string, string> = {
   "/app/vehicles": "Every vehicle on the books: search, filter, open a record, move it along.",
-  "/app/users": "Add staff, change roles, and deactivate accounts.",
+  "/app/users": "Invite staff, change roles, and deactivate accounts.",
+  "/app/leads": "Buyers' enquiries: who asked about which vehicle, and where each conversation stands.",
+  "/app/feeds": "Live stock for portals and partner sites: CSV, JSON, XML and schema.org, at secret addresses.",
+  "/app/mail": "Mail going out, and what the demo's mail catcher received.",
   "/app/settings": "Name, address, licence number, market rules and publishing rules.",
 };

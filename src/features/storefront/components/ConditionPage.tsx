@@ -1,6 +1,7 @@
+import { useEffect } from "react";
 import { Link } from "react-router";
 import type { PublicVehicle } from "../../../../shared/schemas/public.ts";
-import { publishedText, shortUrl } from "../format.ts";
+import { addressLine, publishedText, shortUrl } from "../format.ts";
 import { SiteFooter, SiteHeader } from "./SiteChrome.tsx";
 import { AboutReport } from "./condition/AboutReport.tsx";
 import { Cautions } from "./condition/Cautions.tsx";
@@ -13,6 +14,7 @@ import { ServiceHistory } from "./condition/ServiceHistory.tsx";
 import { Specifications } from "./condition/Specifications.tsx";
 import { TyresAndChecks } from "./condition/TyresAndChecks.tsx";
 import { WhatWeFound } from "./condition/WhatWeFound.tsx";
+import { loadEveryImage } from "./printing.ts";
 
 /**
  * The condition page of one published revision, in the order a buyer asks: what is it and what does it cost, what
@@ -24,6 +26,11 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
   const older = vehicle.revision.number < latest;
   const published = publishedText(vehicle.revision.publishedAt, s.dealership);
   const current = `/vehicles/${encodeURIComponent(vehicle.slug)}`;
+  // Printing from the browser's own menu: ask for every photo at once (the button also waits for them).
+  useEffect(() => {
+    window.addEventListener("beforeprint", loadEveryImage);
+    return () => window.removeEventListener("beforeprint", loadEveryImage);
+  }, []);
   return (
     <div className="fr-report flex min-h-dvh flex-col">
       <PrintPage url={vehicle.url} revision={vehicle.revision.number} published={published} />
@@ -44,6 +51,13 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
       ) : null}
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8">
         <article aria-labelledby="vehicle-title" className="flex flex-col gap-10">
+          {/* On paper the dealership's details head the report (the "Who is selling it" section is left off there). */}
+          <p className="fr-print-head hidden print:block">
+            <strong>Condition report · {s.dealership.name}</strong>, {addressLine(s.dealership)}
+            {s.dealership.phone ? ` · ${s.dealership.phone}` : ""}
+            {s.dealership.email ? ` · ${s.dealership.email}` : ""}
+            {s.dealership.licenceNumber ? ` · Dealer licence ${s.dealership.licenceNumber}` : ""}
+          </p>
           <div className="fr-top grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] lg:items-start lg:gap-10">
             <KeySummary vehicle={vehicle} locale={locale} />
             <Gallery photos={s.photos} title={s.title} locale={locale} />

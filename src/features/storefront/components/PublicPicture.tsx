@@ -39,7 +39,13 @@ export function PublicPicture({
         loading={eager ? "eager" : "lazy"}
         fetchPriority={highPriority ? "high" : undefined}
         decoding="async"
-        onLoad={() => setLoaded(true)}
+        // The placeholder stays until the photo is decoded, so there is never a blank moment between the two.
+        onLoad={(e) => {
+          e.currentTarget
+            .decode()
+            .catch(() => undefined)
+            .finally(() => setLoaded(true));
+        }}
         style={loaded || !photo.placeholder ? undefined : { backgroundImage: `url("${photo.placeholder}")`, backgroundSize: "cover", backgroundPosition: "center" }}
         className={`block ${fit} bg-paper-sunk ${className}`}
       />

@@ -32,7 +32,11 @@ export function Withdrawn({ dealership }: { dealership: PublicDealership | null 
       </p>
       {dealership?.phone ? (
         <p>
-          Questions about it? Call us on <a href={telHref(dealership.phone)}>{dealership.phone}</a>.
+          Questions about it? Call us on{" "}
+          <a href={telHref(dealership.phone)} className="whitespace-nowrap">
+            {dealership.phone}
+          </a>
+          .
         </p>
       ) : null}
     </Frame>

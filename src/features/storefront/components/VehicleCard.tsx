@@ -62,7 +62,7 @@ export function VehicleCard({ card, index, locale, distanceUnit }: { card: Publi
           ))}
           {range ? (
             <div className="col-span-2">
-              <dt className="text-ink-soft">Range per tank, theoretical</dt>
+              <dt className="text-ink-soft">{card.fuelType === "electric" ? "Range per charge" : "Range per tank"}, theoretical</dt>
               <dd className="font-bold">
                 <Qty text={range} />
               </dd>

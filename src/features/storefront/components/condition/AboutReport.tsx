@@ -24,8 +24,8 @@ export function AboutReport({ snapshot: s, revision, publishedAt, locale }: { sn
           The odometer figure is the reading on the instrument at the inspection.
         </p>
         {s.disclaimerHtml ? (
-          <div className="border-l-4 border-line-strong pl-3">
-            <p className="text-sm font-bold">In {s.dealership.name}’s own words</p>
+          <div className="break-inside-avoid border-l-4 border-line-strong pl-3">
+            <p className="text-sm font-bold">In the dealership’s own words</p>
             <div className="prose-copy" dangerouslySetInnerHTML={{ __html: s.disclaimerHtml }} />
           </div>
         ) : null}

@@ -6,7 +6,8 @@ export function Cautions({ cautions }: { cautions: Caution[] }) {
   const blocks = cautions.filter((c) => c.level === "block");
   const advises = cautions.filter((c) => c.level !== "block");
   return (
-    <Section id="cautions" title="Cautions">
+    // On paper an empty list of cautions is left off; the notes on the report still print.
+    <Section id="cautions" title="Cautions" className={cautions.length === 0 ? "print:hidden" : ""}>
       {cautions.length === 0 ? (
         <p className="rounded-md border border-line bg-paper-raised px-4 py-3">Nothing we recorded calls for a caution. The notes on this report below still apply.</p>
       ) : null}

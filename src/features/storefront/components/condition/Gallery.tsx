@@ -95,7 +95,7 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
             </>
           ) : null}
         </div>
-        <figcaption className="mt-2 flex items-baseline justify-between gap-3 text-sm" aria-live="polite">
+        <figcaption className="mt-2 flex items-baseline justify-between gap-3 text-sm print:hidden" aria-live="polite">
           <span className="min-w-0">{caption}</span>
           {total > 1 ? (
             <span className="shrink-0 text-ink-soft figures print:hidden">

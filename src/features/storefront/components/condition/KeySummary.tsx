@@ -1,6 +1,6 @@
 import type { PublicVehicle } from "../../../../../shared/schemas/public.ts";
 import { formatConditionIndex } from "../../../../../shared/domain/display.ts";
-import { addressLine, count, dateText, label, odometerText, priceText, publishedText, rangeText, yearText } from "../../format.ts";
+import { count, dateText, label, odometerText, priceText, publishedText, rangeText, yearText } from "../../format.ts";
 import { Qty } from "../Figure.tsx";
 import { ReportActions } from "./NextSteps.tsx";
 import { Fact } from "./Section.tsx";
@@ -15,13 +15,6 @@ export function KeySummary({ vehicle, locale }: { vehicle: PublicVehicle; locale
   const blocks = s.cautions.filter((c) => c.level === "block");
   return (
     <div className="fr-summary flex min-w-0 flex-col gap-5">
-      {/* On paper the dealership's details head the report (the "Who is selling it" section is left off there). */}
-      <p className="fr-print-head hidden print:block">
-        <strong>Condition report · {s.dealership.name}</strong>, {addressLine(s.dealership)}
-        {s.dealership.phone ? ` · ${s.dealership.phone}` : ""}
-        {s.dealership.email ? ` · ${s.dealership.email}` : ""}
-        {s.dealership.licenceNumber ? ` · Dealer licence ${s.dealership.licenceNumber}` : ""}
-      </p>
       <div>
         <h1 id="vehicle-title" className="text-3xl font-bold sm:text-4xl">
           {s.title}
@@ -72,7 +65,8 @@ export function KeySummary({ vehicle, locale }: { vehicle: PublicVehicle; locale
         </p>
       ) : null}
 
-      <p className="text-sm">
+      {/* On paper the foot of every page says this. */}
+      <p className="text-sm print:hidden">
         Report revision {vehicle.revision.number}, published {publishedText(vehicle.revision.publishedAt, s.dealership)}
         {s.inspectedOn ? `, from the inspection on ${dateText(s.inspectedOn, locale)}` : ""}.
       </p>

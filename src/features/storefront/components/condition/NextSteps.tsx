@@ -1,6 +1,7 @@
 import { Link } from "react-router";
 import type { PublicSnapshot, PublicStatus } from "../../../../../shared/schemas/public.ts";
 import { addressLine, telHref } from "../../format.ts";
+import { printWithImages } from "../printing.ts";
 import { Section } from "./Section.tsx";
 
 const button = "inline-flex min-h-11 items-center justify-center rounded-md border px-4 py-2 font-bold no-underline";
@@ -82,7 +83,7 @@ export function Dealership({ snapshot: s }: { snapshot: PublicSnapshot }) {
 export function ReportActions({ slug, enquiryLink = true }: { slug: string; enquiryLink?: boolean }) {
   return (
     <div className="fr-actions flex flex-wrap gap-3 print:hidden">
-      <button type="button" onClick={() => window.print()} className={`${button} border-line-strong bg-paper-raised text-ink hover:border-ink`}>
+      <button type="button" onClick={() => void printWithImages()} className={`${button} border-line-strong bg-paper-raised text-ink hover:border-ink`}>
         Print this report
       </button>
       <Link to={`/vehicles/${encodeURIComponent(slug)}/card`} className={`${button} border-line-strong bg-paper-raised text-ink hover:border-ink`}>

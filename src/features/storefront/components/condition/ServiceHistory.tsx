@@ -16,7 +16,7 @@ export function ServiceHistory({ snapshot: s, locale }: { snapshot: PublicSnapsh
   const next = s.derived.nextService;
 
   return (
-    <Section id="service" title="How it has been kept" lead={<p>The service records that came with the vehicle, as written in its books and invoices.</p>}>
+    <Section id="service" title="How it has been kept" lead={<p className="print:hidden">The service records that came with the vehicle, as written in its books and invoices.</p>}>
       {flags.length ? (
         <div role="note" className="mb-5 rounded-lg border-2 border-brick bg-brick-wash px-4 py-3">
           <p className="font-bold text-brick">The odometer reading went down between two services</p>

@@ -126,7 +126,7 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
         <>
           <Qty text={range} />
           <span className="font-normal">, theoretical{cycle ? `, ${cycle}` : ""}</span>
-          <span className="block text-sm font-normal">
+          <span className="block text-sm font-normal print:hidden">
             {s.fuelType === "electric" ? "Battery capacity ÷ energy use" : "Tank size ÷ fuel use"} on the test figure; real driving usually gives less.
           </span>
         </>

@@ -24,8 +24,8 @@ export function TyresAndChecks({ snapshot, locale }: { snapshot: PublicSnapshot;
           <h3 className="text-xl font-bold">Tyres</h3>
           <p className="mt-1">
             {measured ? <>Measured on {measured}. </> : null}
-            The legal minimum tread depth where we sell is <Qty text={min} />, at the shallowest point. The tread figures are for information: local law and a licensed
-            inspector decide.
+            The legal minimum tread depth where we sell is <Qty text={min} />, at the shallowest point.
+            <span className="print:hidden"> The tread figures are for information: local law and a licensed inspector decide.</span>
           </p>
           {readings.length === 0 ? (
             <p className="mt-3 rounded-md border-l-4 border-ochre bg-ochre-wash px-3 py-2">The tyres were not measured for this report. Ask us, or have them checked.</p>
@@ -44,7 +44,7 @@ export function TyresAndChecks({ snapshot, locale }: { snapshot: PublicSnapshot;
           <h3 className="text-xl font-bold">Checks</h3>
           <p className="mt-1">
             {checkDates.length === 1 ? <>Run on {dateText(checkDates[0], locale)}. </> : null}
-            Each check is a pass, an advise (works, but needs attention soon) or a fail.
+            <span className="print:hidden">Each check is a pass, an advise (works, but needs attention soon) or a fail.</span>
           </p>
           {checks.length === 0 ? (
             <p className="mt-3 rounded-md border-l-4 border-ochre bg-ochre-wash px-3 py-2">No checks were recorded for this report. Ask us, or have the vehicle inspected.</p>

@@ -71,7 +71,7 @@ export function WhatWeFound({ snapshot, locale }: { snapshot: PublicSnapshot; lo
           <DefectList snapshot={snapshot} selected={selected} onShowPin={showPin} locale={locale} />
         </div>
       )}
-      {defects.length === 0 ? <ZoneSummary snapshot={snapshot} /> : null}
+      <ZoneSummary snapshot={snapshot} />
     </Section>
   );
 }
@@ -120,7 +120,7 @@ function SeverityCounts({ condition, defects, locale }: { condition: PublicSnaps
       </dl>
       <p className="mt-3 text-sm">
         {safety === 0 ? "None of them affects safety." : <strong className="text-brick">{count(safety, "item affects", "items affect", locale)} safety: see the cautions.</strong>}{" "}
-        Minor items are the small marks of normal use; major items are ones most buyers would want put right.
+        <span className="print:hidden">Minor items are the small marks of normal use; major items are ones most buyers would want put right.</span>
       </p>
     </div>
   );
@@ -215,7 +215,6 @@ function DefectList({ snapshot, selected, onShowPin, locale }: { snapshot: Publi
           </div>
         ))}
       </div>
-      <ZoneSummary snapshot={snapshot} />
     </div>
   );
 }
@@ -238,7 +237,11 @@ function DefectRow({ defect: d, selected, onShowPin, locale }: { defect: PublicD
         </span>
       )}
       <div className="min-w-0 flex-1">
-        <p className="font-bold">{headline(d, locale)}</p>
+        <p className="font-bold">
+          {/* On paper the zone headings are left off and each row names its zone. */}
+          <span className="hidden print:inline">{zoneLabel(d.zone)}: </span>
+          {headline(d, locale)}
+        </p>
         {d.safetyRelevant ? <p className="font-bold text-brick">Affects safety: see the cautions below.</p> : null}
         {d.note ? <p>{d.note}</p> : null}
         <p className="text-sm">

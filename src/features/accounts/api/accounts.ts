@@ -1,0 +1,47 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { get, post } from "../../../lib/api-client.ts";
+import { sessionKeys } from "../../../lib/auth.ts";
+import type { SessionUser } from "../../../../shared/schemas/auth.ts";
+import type { Role } from "../../../../shared/constants/roles.ts";
+import type { inspectInvite } from "../../../../server/modules/auth/tokens.service.ts";
+
+export type Invitation = Awaited<ReturnType<typeof inspectInvite>>;
+
+export const accountKeys = {
+  all: ["accounts"] as const,
+  invitation: (token: string) => [...accountKeys.all, "invitation", token] as const,
+};
+
+export const invitationQueryOptions = (token: string) =>
+  queryOptions({
+    queryKey: accountKeys.invitation(token),
+    queryFn: () => get<{ invitation: Invitation }>(`/api/auth/invitations/${encodeURIComponent(token)}`),
+    staleTime: Infinity,
+    refetchOnWindowFocus: false,
+  });
+
+export const useInvitation = (token: string) => useQuery({ ...invitationQueryOptions(token), enabled: token.length > 0 });
+
+export const useRequestReset = () => useMutation({ mutationFn: (input: { email: string }) => post<{ message: string }>("/api/auth/password-reset", input) });
+
+export const useConfirmReset = () =>
+  useMutation({ mutationFn: (input: { token: string; password: string }) => post<{ reset: true }>("/api/auth/password-reset/confirm", input) });
+
+export function useAcceptInvite() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { token: string; password: string }) => post<{ user: SessionUser | null }>("/api/auth/invitations/accept", input),
+    onSuccess: (data) => {
+      qc.clear();
+      qc.setQueryData(sessionKeys.all, { user: data.user });
+    },
+  });
+}
+
+export function useInvite() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { email: string; name: string; role: Role }) => post<{ invited: string }>("/api/users/invite", input),
+    onSuccess: () => qc.invalidateQueries({ queryKey: ["mail"] }),
+  });
+}

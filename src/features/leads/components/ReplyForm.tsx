@@ -1,0 +1,70 @@
+import { useState, type FormEvent } from "react";
+import { useReplyToLead, type LeadDetail } from "../api/leads.ts";
+import { isApiError } from "../../../lib/api-client.ts";
+import { TextAreaField } from "../../../components/form/Field.tsx";
+import { Button } from "../../../components/ui/Button.tsx";
+import { Notice } from "../../../components/feedback/Notice.tsx";
+import { leadMessageSchema } from "../../../../shared/schemas/enquiries.ts";
+import { zodFields } from "../../../../shared/schemas/fields.ts";
+
+/** A reply by e-mail from the dealership's address; it is kept in the conversation with its delivery state. */
+export function ReplyForm({ lead }: { lead: LeadDetail }) {
+  const reply = useReplyToLead(lead.id);
+  const [body, setBody] = useState("");
+  const [clientError, setClientError] = useState<string | null>(null);
+  const [sent, setSent] = useState(false);
+  const noEmail = !lead.email;
+  const error = reply.error;
+  const fieldError = clientError ?? (isApiError(error) ? error.fields.body : undefined);
+
+  function submit(e: FormEvent) {
+    e.preventDefault();
+    setSent(false);
+    const parsed = leadMessageSchema.safeParse({ body });
+    if (!parsed.success) return setClientError(zodFields(parsed.error).body ?? "Write the message.");
+    setClientError(null);
+    reply.mutate(parsed.data, {
+      onSuccess: () => {
+        setBody("");
+        setSent(true);
+      },
+    });
+  }
+
+  if (noEmail)
+    return (
+      <div className="flex flex-col gap-3">
+        <TextAreaField label={`Your reply to ${lead.name}`} disabled value="" rows={3} />
+        <Notice tone="info" title="No e-mail address to reply to">
+          {lead.name} gave only a phone number{lead.phone ? (
+            <>
+              : call <a href={`tel:${lead.phone.replace(/[^\d+]/g, "")}`}>{lead.phone}</a>
+            </>
+          ) : null}
+          , then add a note of the call below.
+        </Notice>
+      </div>
+    );
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-3">
+      {sent ? <Notice tone="success" title="Reply queued">It goes out from the dealership's address within a moment; its state shows in the conversation.</Notice> : null}
+      {error && !fieldError ? <Notice tone="danger" title="The reply was not sent">{error.message} Your text is still here.</Notice> : null}
+      <TextAreaField
+        label={`Your reply to ${lead.name}`}
+        name="reply"
+        value={body}
+        onChange={(e) => {
+          setBody(e.target.value);
+          setSent(false);
+        }}
+        error={fieldError}
+        hint={<>Goes to <span className="font-mono">{lead.email}</span> with a link to the condition page.</>}
+        rows={6}
+      />
+      <Button type="submit" busy={reply.isPending} className="self-start">
+        Send reply by e-mail
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,28 @@
+/** The browser's calendar day as YYYY-MM-DD (follow-up dates are calendar days, not instants). */
+export const localToday = (now = new Date()) =>
+  `${now.getFullYear()}-${String(now.getMonth() + 1).padStart(2, "0")}-${String(now.getDate()).padStart(2, "0")}`;
+
+export const formatDay = (ymd: string) => {
+  const [y, m, d] = ymd.split("-").map(Number);
+  return new Date(y, m - 1, d).toLocaleDateString(undefined, { day: "numeric", month: "short", year: "numeric" });
+};
+
+export const formatWhen = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
+
+export const ageWords = (days: number) => (days <= 0 ? "Today" : days === 1 ? "1 day" : `${days} days`);
+
+/** Follow-up state in words: colour may add to it, never replace it. */
+export function followUpState(followUpOn: string | null, today = localToday()): { word: "overdue" | "today" | "later" | "none"; text: string } {
+  if (!followUpOn) return { word: "none", text: "None set" };
+  if (followUpOn < today) return { word: "overdue", text: `${formatDay(followUpOn)}, overdue` };
+  if (followUpOn === today) return { word: "today", text: `${formatDay(followUpOn)}, today` };
+  return { word: "later", text: formatDay(followUpOn) };
+}
+
+export const SOURCE_LABELS: Record<string, string> = { condition_page: "Condition page enquiry form" };
+
+export const MAIL_STATUS_WORDS: Record<"queued" | "sent" | "failed", string> = {
+  queued: "Queued, not sent yet",
+  sent: "Sent",
+  failed: "Failed to send: see Mail",
+};
