@@ -11,7 +11,19 @@ export default defineConfig({
   plugins: [react(), tailwindcss()],
   root: here("./src"),
   publicDir: false,
-  build: { outDir: here("./dist/client"), emptyOutDir: true, sourcemap: false },
+  build: {
+    outDir: here("./dist/client"),
+    emptyOutDir: true,
+    sourcemap: false,
+    rollupOptions: {
+      output: {
+        // Chunks made only of shared/ code carry a "shared-" prefix, so a staff page's chunk is never mistaken for a
+        // constants module of the same name (the public-page tests check which chunks load).
+        chunkFileNames: (chunk: { moduleIds?: string[] }) =>
+          chunk.moduleIds?.length && chunk.moduleIds.every((id) => id.includes("/shared/")) ? "assets/shared-[name]-[hash].js" : "assets/[name]-[hash].js",
+      },
+    },
+  },
   server: {
     host: "127.0.0.1",
     port: 5173,
@@ -26,7 +38,7 @@ export default defineConfig({
     environment: "node",
     globalSetup: [here("./tests/support/global-setup.ts")],
     include: ["tests/**/*.test.ts"],
-    testTimeout: 30_000,
+    testTimeout: 90_000,
     hookTimeout: 120_000,
     fileParallelism: true,
     maxWorkers: 2,

@@ -44,4 +44,5 @@ export interface PublicDealership {
   locale: string;
   currency: string;
   distanceUnit: (typeof DISTANCE_UNITS)[number];
+  timeZone: string;
 }

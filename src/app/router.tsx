@@ -1,4 +1,4 @@
-import { createBrowserRouter, type RouteObject } from "react-router";
+import { createBrowserRouter, Navigate, useParams, type RouteObject } from "react-router";
 import { RouteError } from "./routes/route-error.tsx";
 import { Loading } from "../components/feedback/Notice.tsx";
 
@@ -7,6 +7,12 @@ const page = (load: () => Promise<{ default: React.ComponentType }>): Pick<Route
   lazy: async () => ({ Component: (await load()).default }),
 });
 
+/** Older revisions open on the condition page itself (?revision=N); this address keeps links in mails working. */
+function RevisionRedirect() {
+  const { slug, number } = useParams();
+  return <Navigate to={`/vehicles/${slug}?revision=${number}`} replace />;
+}
+
 export const routes: RouteObject[] = [
   {
     errorElement: <RouteError />,
@@ -14,7 +20,7 @@ export const routes: RouteObject[] = [
     children: [
       { path: "/", ...page(() => import("./routes/storefront.tsx")) },
       { path: "/vehicles/:slug", ...page(() => import("./routes/public-vehicle.tsx")) },
-      { path: "/vehicles/:slug/revisions/:number", ...page(() => import("./routes/public-vehicle.tsx")) },
+      { path: "/vehicles/:slug/revisions/:number", Component: RevisionRedirect },
       { path: "/vehicles/:slug/card", ...page(() => import("./routes/window-card.tsx")) },
       { path: "/sign-in", ...page(() => import("./routes/sign-in.tsx")) },
       { path: "/forgot-password", ...page(() => import("./routes/forgot-password.tsx")) },

@@ -353,7 +353,15 @@ async function throughput(env: BenchEnv, ctx: AppContext, base: string, slug: st
   const seconds = SECONDS * 2;
   return [
     { figure: "public vehicle API, requests/s (mean)", unit: "req/s", value: mean(app, (r) => r.requests.average), baseline: mean(ref, (r) => r.requests.average), baselineLabel: "same bytes, plain node:http", samples: seconds },
-    { figure: "public vehicle API, p99 latency", unit: "ms", value: mean(app, (r) => r.latency.p99), baseline: mean(ref, (r) => r.latency.p99), baselineLabel: "same bytes, plain node:http", samples: app.reduce((s, r) => s + r.requests.total, 0) },
+    {
+      figure: "public vehicle API, p99 latency",
+      unit: "ms",
+      value: mean(app, (r) => r.latency.p99),
+      // autocannon's histogram counts whole milliseconds: a sub-millisecond p99 reads 0, shown as 1 (the ratio is then a lower bound).
+      baseline: Math.max(1, mean(ref, (r) => r.latency.p99)),
+      baselineLabel: mean(ref, (r) => r.latency.p99) < 1 ? "plain node:http, under 1 ms: autocannon's resolution, ratio ≥" : "same bytes, plain node:http",
+      samples: app.reduce((s, r) => s + r.requests.total, 0),
+    },
   ];
 }
 
@@ -361,7 +369,9 @@ async function throughput(env: BenchEnv, ctx: AppContext, base: string, slug: st
 // 2. The JavaScript the condition page loads.
 
 async function pageJavaScript(env: BenchEnv, base: string, slug: string, title: string, browsers: Browser[]): Promise<BenchResult[]> {
-  const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: CHROMIUM_FLAGS });
+  // Playwright's own signal handlers would call process.exit(130) before the harness has stopped MariaDB; its exit
+  // handler still kills the browser if the run is interrupted.
+  const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: CHROMIUM_FLAGS, handleSIGINT: false, handleSIGTERM: false, handleSIGHUP: false });
   browsers.push(browser);
   const context = await browser.newContext({ viewport: { width: 412, height: 823 }, deviceScaleFactor: 1.75, isMobile: true, hasTouch: true });
   const page = await context.newPage();

@@ -96,11 +96,11 @@ describe("leads in Chromium", () => {
     await page.getByLabel("Assigned to").selectOption("unassigned");
     await page.waitForURL(/assignee=unassigned/);
     await expect.poll(() => row.count()).toBe(1);
-    await page.getByLabel("Search leads").fill("nobody-of-that-name");
+    await page.getByLabel("Search enquiries").fill("nobody-of-that-name");
     await page.getByRole("button", { name: "Search" }).click();
     await page.waitForURL(/q=nobody-of-that-name/);
-    await expect.poll(() => page.getByText("No leads match these filters").count()).toBe(1);
-    await page.getByRole("button", { name: "Show every lead" }).click();
+    await expect.poll(() => page.getByText("No enquiries match these filters").count()).toBe(1);
+    await page.getByRole("button", { name: "Show every enquiry" }).click();
 
     await page.getByRole("link", { name: "Jo Marlowe" }).click();
     await page.waitForURL(/\/app\/leads\/\d+$/);
@@ -164,6 +164,8 @@ describe("leads in Chromium", () => {
     await admin.getByRole("button", { name: "Plain text" }).click();
     expect(await admin.locator("pre").innerText()).toMatch(/2,500 kg/);
     await admin.getByRole("button", { name: "As HTML" }).click();
+    await expect.poll(() => admin.frameLocator('iframe[sandbox=""]').locator("body").innerText()).toMatch(/2,500 kg/);
+    await admin.waitForTimeout(300); // let the sandboxed document paint before the full-page capture
     await screenshot(admin, "mail-outbox");
     expect(adminErrors).toEqual([]);
     await admin.close();

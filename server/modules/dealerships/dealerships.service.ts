@@ -45,6 +45,7 @@ export function presentPublicDealership(d: Dealership): PublicDealership {
     locale: d.locale,
     currency: d.currency,
     distanceUnit: d.distanceUnit,
+    timeZone: d.timeZone,
   };
 }
 

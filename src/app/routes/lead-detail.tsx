@@ -57,7 +57,7 @@ function LeadPage({ id }: { id: number }) {
   if (q.isError)
     return (
       <Notice tone="danger" title={q.error.status === 404 ? "There is no such lead" : "The lead could not be loaded"}>
-        {q.error.message} <Link to="/app/leads">Back to the leads</Link>
+        {q.error.message} <Link to="/app/leads">Back to the enquiries</Link>
       </Notice>
     );
   const lead = q.data.lead;
@@ -65,7 +65,7 @@ function LeadPage({ id }: { id: number }) {
   return (
     <>
       <p className="mb-2 text-sm">
-        <Link to="/app/leads">← Leads</Link>
+        <Link to="/app/leads">← Enquiries</Link>
       </p>
       <PageHeader
         title={lead.name}
@@ -122,7 +122,7 @@ export default function LeadDetailRoute() {
   const n = Number(id);
   return (
     <RequireRole roles={["admin", "sales"]}>
-      {Number.isInteger(n) && n > 0 ? <LeadPage key={n} id={n} /> : <Notice tone="danger" title="There is no such lead"><Link to="/app/leads">Back to the leads</Link></Notice>}
+      {Number.isInteger(n) && n > 0 ? <LeadPage key={n} id={n} /> : <Notice tone="danger" title="There is no such lead"><Link to="/app/leads">Back to the enquiries</Link></Notice>}
     </RequireRole>
   );
 }

@@ -34,17 +34,17 @@ function Inbox() {
 
   return (
     <>
-      <PageHeader title="Leads" lead="Buyers' questions from the condition pages, open ones first. Reply the same working day; set a follow-up date so nobody waits." />
+      <PageHeader title="Enquiries" lead="Buyers' questions from the condition pages, open ones first. Reply the same working day; set a follow-up date so nobody waits." />
       <LeadFiltersBar filters={filters} onChange={change} />
       {list.isPending ? (
-        <Loading label="Loading leads…" />
+        <Loading label="Loading enquiries…" />
       ) : list.isError ? (
-        <Notice tone="danger" title="The leads could not be loaded">{list.error.message}</Notice>
+        <Notice tone="danger" title="The enquiries could not be loaded">{list.error.message}</Notice>
       ) : list.data.leads.length === 0 ? (
         filtered ? (
-          <EmptyState title="No leads match these filters">
+          <EmptyState title="No enquiries match these filters">
             <button type="button" className="min-h-11 font-bold text-signal underline" onClick={() => setParams(new URLSearchParams())}>
-              Show every lead
+              Show every enquiry
             </button>
           </EmptyState>
         ) : (

@@ -32,7 +32,9 @@ export function useAcceptInvite() {
   return useMutation({
     mutationFn: (input: { token: string; password: string }) => post<{ user: SessionUser | null }>("/api/auth/invitations/accept", input),
     onSuccess: (data) => {
-      qc.clear();
+      // Drop whatever a previous session left, but keep the (now used) invitation: refetching it would only say
+      // "no longer valid" to the person who has just used it.
+      qc.removeQueries({ predicate: (q) => q.queryKey[0] !== accountKeys.all[0] });
       qc.setQueryData(sessionKeys.all, { user: data.user });
     },
   });

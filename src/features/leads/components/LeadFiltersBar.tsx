@@ -44,7 +44,7 @@ export function LeadFiltersBar({ filters, onChange }: { filters: LeadFilters; on
       </label>
       <div className="flex items-end gap-2">
         <label className="flex flex-col gap-1 text-sm font-bold">
-          Search leads
+          Search enquiries
           <input
             type="search"
             className={`${select} w-64 px-3`}

@@ -81,7 +81,7 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
           </div>
           <div className="fr-pair grid grid-cols-1 gap-10 lg:grid-cols-2">
             <AboutReport snapshot={s} revision={vehicle.revision.number} publishedAt={vehicle.revision.publishedAt} locale={locale} />
-            <Enquiry snapshot={s} status={vehicle.status} />
+            <Enquiry snapshot={s} status={vehicle.status} revision={vehicle.revision.number} slug={vehicle.slug} />
           </div>
           <div className="border-t border-line pt-6 print:hidden">
             <ReportActions slug={vehicle.slug} enquiryLink={false} />

@@ -18,7 +18,7 @@ export function VehicleCard({ card, index, locale, distanceUnit }: { card: Publi
   ];
   const range = rangeText(card.rangeKm, distanceUnit, locale);
   return (
-    <article className="relative flex flex-col overflow-hidden rounded-lg border border-line bg-paper-raised focus-within:outline-3 focus-within:outline-signal has-[a:hover]:border-line-strong">
+    <article className="relative flex flex-col overflow-hidden rounded-lg border border-line bg-paper-raised has-[a:focus-visible]:outline-3 has-[a:focus-visible]:outline-offset-2 has-[a:focus-visible]:outline-signal has-[a:hover]:border-line-strong">
       <div className="relative aspect-[4/3] bg-paper-sunk">
         {card.cover ? (
           <PublicPicture
@@ -40,11 +40,11 @@ export function VehicleCard({ card, index, locale, distanceUnit }: { card: Publi
       </div>
       <div className="flex flex-1 flex-col gap-3 p-4">
         <div>
-          <h2 className="text-lg font-bold">
+          <h3 className="text-lg font-bold">
             <Link to={`/vehicles/${encodeURIComponent(card.slug)}`} className="text-ink no-underline outline-none after:absolute after:inset-0 hover:underline">
               {card.title}
             </Link>
-          </h2>
+          </h3>
           {card.variant ? <p className="text-ink-soft">{card.variant}</p> : null}
         </div>
         <p className="text-2xl font-bold figures">

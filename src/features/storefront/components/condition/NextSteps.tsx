@@ -3,14 +3,12 @@ import type { PublicSnapshot, PublicStatus } from "../../../../../shared/schemas
 import { addressLine, telHref } from "../../format.ts";
 import { printWithImages } from "../printing.ts";
 import { Section } from "./Section.tsx";
+import { EnquiryForm } from "../../../enquiries/EnquiryForm.tsx";
 
 const button = "inline-flex min-h-11 items-center justify-center rounded-md border px-4 py-2 font-bold no-underline";
 
-/**
- * "Ask about this vehicle": the place kept for the enquiry form. Until the form exists it says so and offers the
- * dealership's phone and e-mail, with the stock number in the subject.
- */
-export function Enquiry({ snapshot: s, status }: { snapshot: PublicSnapshot; status: PublicStatus }) {
+/** "Ask about this vehicle": the enquiry form (it becomes a lead for the salesperson), with phone and e-mail beside it. */
+export function Enquiry({ snapshot: s, status, revision, slug }: { snapshot: PublicSnapshot; status: PublicStatus; revision: number; slug: string }) {
   const d = s.dealership;
   const subject = `Stock number ${s.stockNumber}: ${s.title}`;
   return (
@@ -21,12 +19,16 @@ export function Enquiry({ snapshot: s, status }: { snapshot: PublicSnapshot; sta
             ? "This vehicle is sold. Ask us about similar ones, or about this report."
             : status === "reserved"
               ? "This vehicle is reserved for another buyer. Ask us to tell you if it becomes available again."
-              : "Ask us anything about this vehicle, arrange a viewing or a test drive, or book an independent inspection."}{" "}
-          An online enquiry form is coming; for now, please call or e-mail us and quote stock number <span className="font-mono font-bold">{s.stockNumber}</span>.
+              : "Ask us anything about this vehicle, arrange a viewing or a test drive, or book an independent inspection."}
         </p>
+        {status !== "sold" ? (
+          <div className="mt-4">
+            <EnquiryForm slug={slug} revision={revision} vehicleTitle={s.title} stockNumber={s.stockNumber} dealership={{ name: d.name, phone: d.phone, email: d.email }} />
+          </div>
+        ) : null}
         <div className="mt-4 flex flex-wrap gap-3">
           {d.phone ? (
-            <a href={telHref(d.phone)} className={`${button} border-signal-strong bg-signal text-paper-raised hover:bg-signal-strong hover:text-paper-raised`}>
+            <a href={telHref(d.phone)} className={`${button} border-line-strong bg-paper-raised text-ink hover:border-ink`}>
               Call {d.phone}
             </a>
           ) : null}
