@@ -1,5 +1,6 @@
 import express, { type Express } from "express";
 import helmet from "helmet";
+import compression from "compression";
 import { pinoHttp } from "pino-http";
 import { randomUUID } from "node:crypto";
 import type { AppContext } from "./lib/context.ts";
@@ -70,6 +71,10 @@ export function createApp(ctx: AppContext): Express {
       referrerPolicy: { policy: "strict-origin-when-cross-origin" },
     }),
   );
+
+  // Text (HTML, JSON, JS, CSS, XML, SVG) is compressed; images are already compressed and are left alone.
+  // Feeds stream and carry their own ETags, so compression is fine there too (it flushes as rows arrive).
+  app.use(compression({ threshold: 1024 }));
 
   const api = express.Router();
   api.use(express.json({ limit: "512kb" }));

@@ -6,10 +6,10 @@ export async function connect(url: string): Promise<Database> {
   const database = connectPool(url, { connectionLimit: 5 });
   const conn = await database.pool.getConnection();
   try {
-    await conn.query("SELECT GET_LOCK('forthright_migrate', 60)");
+    await conn.query("SELECT GET_LOCK(CONCAT(DATABASE(), ':migrate'), 60)");
     await applyMigrations(database.db);
   } finally {
-    await conn.query("SELECT RELEASE_LOCK('forthright_migrate')").catch(() => undefined);
+    await conn.query("SELECT RELEASE_LOCK(CONCAT(DATABASE(), ':migrate'))").catch(() => undefined);
     conn.release();
   }
   return database;

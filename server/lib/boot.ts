@@ -28,10 +28,10 @@ async function checkDurability(ctx: AppContext) {
 async function migrateWithLock(ctx: AppContext) {
   const conn = await ctx.database.pool.getConnection();
   try {
-    await conn.query("SELECT GET_LOCK('forthright_migrate', 60)");
+    await conn.query("SELECT GET_LOCK(CONCAT(DATABASE(), ':migrate'), 60)");
     await applyMigrations(ctx.database.db);
   } finally {
-    await conn.query("SELECT RELEASE_LOCK('forthright_migrate')").catch(() => undefined);
+    await conn.query("SELECT RELEASE_LOCK(CONCAT(DATABASE(), ':migrate'))").catch(() => undefined);
     conn.release();
   }
 }

@@ -44,7 +44,7 @@ export class PhotoWorker extends BackgroundLoop {
   private async processOne(id: number): Promise<boolean> {
     const conn = await this.database.pool.getConnection();
     try {
-      const [[lock]] = (await conn.query("SELECT GET_LOCK(?, 0) AS got", [`photo:${id}`])) as unknown as [[{ got: number }]];
+      const [[lock]] = (await conn.query("SELECT GET_LOCK(CONCAT(DATABASE(), ':photo:', ?), 0) AS got", [id])) as unknown as [[{ got: number }]];
       if (!lock?.got) return false;
       const [row] = await this.database.db.select().from(photos).where(eq(photos.id, id));
       if (!row || row.status !== "processing") return true;
@@ -58,7 +58,7 @@ export class PhotoWorker extends BackgroundLoop {
       }
       return true;
     } finally {
-      await conn.query("SELECT RELEASE_LOCK(?)", [`photo:${id}`]).catch(() => undefined);
+      await conn.query("SELECT RELEASE_LOCK(CONCAT(DATABASE(), ':photo:', ?))", [id]).catch(() => undefined);
       conn.release();
     }
   }

@@ -39,6 +39,11 @@ export function pagesRoutes(ctx: AppContext): Router {
     res.type("application/xml").send(`<?xml version="1.0" encoding="UTF-8"?>\n<urlset xmlns="http://www.sitemaps.org/schemas/sitemap/0.9">\n${body}\n</urlset>\n`);
   });
 
+  // No icon file: answer plainly rather than with the app's HTML.
+  router.get("/favicon.ico", (_req, res) => {
+    res.status(204).setHeader("Cache-Control", "public, max-age=86400").end();
+  });
+
   router.get("/robots.txt", (_req, res) => {
     res.type("text/plain").send(`User-agent: *\nDisallow: /app\nDisallow: /api/\nDisallow: /sign-in\nAllow: /\nSitemap: ${ctx.config.publicUrl}/sitemap.xml\n`);
   });
