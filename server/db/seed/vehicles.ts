@@ -35,6 +35,7 @@ export async function seedDemoVehicles(db: Db, dealershipId: number, now = new D
       const [res] = await tx.insert(vehicles).values({
         ...row,
         dealershipId,
+        salespersonId: sales.id,
         stockNumber: String(stock),
         status: demo.status,
         odometerKmIndex: row.odometerReading,

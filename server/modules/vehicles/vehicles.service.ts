@@ -101,6 +101,8 @@ export async function create(ctx: AppContext, actor: User, input: CreateVehicleI
       ...base,
       dealershipId: d.id,
       stockNumber,
+      // The salesperson who takes the vehicle in answers its enquiries; an admin's vehicles go to the dealership inbox.
+      salespersonId: actor.role === "sales" ? actor.id : null,
       odometerKmIndex: odometerKmOf(base.odometerReading, base.odometerUnit ?? "km"),
       derived,
       stockedAt: ctx.now(),
