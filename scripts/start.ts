@@ -27,7 +27,11 @@ const password = process.env.DEMO_PASSWORD ?? "forthright-demo";
 }
 if (process.env.SKIP_BUILD !== "1") {
   console.log("Building the client…");
+  // Vite sets NODE_ENV=production for the build; the server must keep the mode it was started in (demo or not).
+  const mode = process.env.NODE_ENV;
   await build({ logLevel: "warn" });
+  if (mode === undefined) delete process.env.NODE_ENV;
+  else process.env.NODE_ENV = mode;
 }
 const { ctx } = await main();
 console.log(`\nForthright is running at ${ctx.config.publicUrl}\n`);

@@ -22,6 +22,8 @@ export function pagesRoutes(ctx: AppContext): Router {
     try {
       const v = await getPublic(ctx, slug);
       head = vehicleHeadTags(v.snapshot, v.status, v.url, ctx.config.publicUrl);
+      // The page's own data, so the condition page renders without a second round trip (a data block, never run).
+      head += `\n    <script type="application/json" id="fr-page-data">${JSON.stringify({ slug, vehicle: v }).replace(/</g, "\\u003c")}</script>`;
       if (req.path.endsWith("/card")) head += `\n    <meta name="robots" content="noindex" />`;
     } catch (err) {
       if (!(err instanceof AppError) || (err.status !== 404 && err.status !== 410)) throw err;

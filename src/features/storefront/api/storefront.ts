@@ -83,10 +83,26 @@ export const storefrontListQueryOptions = (filters: PublicListQuery) =>
     placeholderData: keepPreviousData,
   });
 
+/** The vehicle the server wrote into this page's HTML (pages.routes.ts), read once, when it is the one asked for. */
+let embedded: { slug: string; vehicle: PublicVehicle } | null | undefined;
+function embeddedVehicle(slug: string): { vehicle: PublicVehicle } | undefined {
+  if (embedded === undefined) {
+    try {
+      const el = typeof document !== "undefined" ? document.getElementById("fr-page-data") : null;
+      embedded = el?.textContent ? (JSON.parse(el.textContent) as { slug: string; vehicle: PublicVehicle }) : null;
+    } catch {
+      embedded = null;
+    }
+  }
+  return embedded && embedded.slug === slug ? { vehicle: embedded.vehicle } : undefined;
+}
+
 export const publicVehicleQueryOptions = (slug: string) =>
   queryOptions({
     queryKey: storefrontKeys.detail(slug),
     queryFn: ({ signal }) => getPublic<{ vehicle: PublicVehicle }>(`/api/public/vehicles/${encodeURIComponent(slug)}`, signal),
+    initialData: () => embeddedVehicle(slug),
+    initialDataUpdatedAt: () => (embeddedVehicle(slug) ? Date.now() : undefined),
     staleTime: 60_000,
   });
 
