@@ -23,7 +23,11 @@ run("node_modules/.bin/vitest", ["run", "--reporter=default", "--reporter=json",
 if (existsSync(report)) {
   const r = JSON.parse(readFileSync(report, "utf8"));
   passed += r.numPassedTests;
-  failed += r.numFailedTests + (r.numFailedTestSuites ?? 0);
+  failed += r.numFailedTests;
+  // A file that failed before any test ran (an import error, a failing beforeAll) counts once.
+  for (const file of r.testResults ?? []) {
+    if (file.status === "failed" && !(file.assertionResults ?? []).some((a) => a.status === "failed")) failed++;
+  }
 } else {
   failed++;
 }

@@ -21,6 +21,8 @@ beforeAll(async () => {
   smtp = await startFakeSmtp(t.ctx.database, 0);
   t.ctx.mail.retarget({ port: smtp.port });
   ({ slug, vehicleId } = await publishReadyVehicle(t));
+  // As if an admin had taken the vehicle in: its enquiries reach the dealership's inbox unassigned, for sales to take.
+  await t.ctx.database.pool.query("update vehicles set salesperson_id = null where id = ?", [vehicleId]);
   server = await listen(t.app);
   browser = await launchBrowser();
 }, 120_000);
