@@ -7,9 +7,9 @@
  */
 import { mkdirSync, mkdtempSync, readdirSync, writeFileSync } from "node:fs";
 import { randomBytes } from "node:crypto";
-import { createServer } from "node:net";
 import { cpus, tmpdir } from "node:os";
 import path from "node:path";
+import { freePort } from "../support/ports.ts";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import {
   databaseUrl, dropDatabase, ensureMariadbInstalled, instanceFor, provisionDatabase, removeDataDir, startMariadb, stopMariadb,
@@ -20,17 +20,6 @@ import type { BenchDatabase, BenchEnv, BenchModule, BenchResult } from "./types.
 const BENCH_DIR = path.dirname(fileURLToPath(import.meta.url));
 const REPORT = path.resolve("test-results/bench-report.md");
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.unref();
-    srv.on("error", reject);
-    srv.listen(0, "127.0.0.1", () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => resolve(port));
-    });
-  });
-}
 
 async function loadBenches(words: string[]): Promise<BenchModule[]> {
   const files = readdirSync(BENCH_DIR).filter((f) => f.endsWith(".bench.ts")).sort();

@@ -1,36 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { DEMO_PASSWORD, startTestApp, type TestApp } from "../support/app.ts";
-import { launchBrowser, screenshot, watchErrors } from "../support/browser.ts";
-import { listen } from "../support/http-server.ts";
+import { describe, expect, it } from "vitest";
+import { e2eWorld } from "../support/e2e.ts";
+import type { Page } from "playwright-core";
+import { screenshot, watchErrors } from "../support/browser.ts";
 import { dieselSuv } from "../support/vehicles.ts";
 
-let t: TestApp;
-let browser: Browser;
-let server: Awaited<ReturnType<typeof listen>>;
+const world = e2eWorld();
 
-beforeAll(async () => {
-  t = await startTestApp();
-  server = await listen(t.app);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  await t?.close();
-});
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL(`${server.url}/app`);
-}
+const signIn = (page: Page, email: string) => world.signIn(page, email);
 
 /** Sales puts the vehicle into stock through the API, as in tests/api/walkaround.test.ts. */
 async function stockedVehicle(): Promise<number> {
-  const sales = await t.signIn("sales");
+  const sales = await world.t.signIn("sales");
   const res = await sales.post("/api/vehicles").send(dieselSuv());
   expect(res.status).toBe(201);
   return res.body.vehicle.id as number;
@@ -56,11 +36,11 @@ async function fillTyre(page: Page, name: string, r: { inner: string; centre: st
 describe("tyres and checks on a phone in Chromium", () => {
   it("when the workshop records four tyres and fails the brakes, then the live figures and the blocking cautions show, and a reload keeps every value", async () => {
     const id = await stockedVehicle();
-    const page = await browser.newPage({ viewport: PHONE, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
+    const page = await world.browser.newPage({ viewport: PHONE, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
     page.setDefaultTimeout(8_000); // a missing element fails with its name, inside the test's 30 s
     const errors = watchErrors(page);
     await signIn(page, "workshop@demo.test");
-    await page.goto(`${server.url}/app/vehicles/${id}/checks`);
+    await page.goto(`${world.url}/app/vehicles/${id}/checks`);
     await expect.poll(() => page.getByRole("heading", { name: "Tyres", exact: true }).count()).toBe(1);
     expect(await page.getByText("Nothing recorded here calls for a caution.").count()).toBe(1);
 
@@ -135,7 +115,7 @@ describe("tyres and checks on a phone in Chromium", () => {
     await page.evaluate(() => window.scrollTo(0, 0));
     await screenshot(page, "checks-phone-saved");
 
-    const stored = (await (await t.signIn("sales")).get(`/api/vehicles/${id}/checks`)).body;
+    const stored = (await (await world.t.signIn("sales")).get(`/api/vehicles/${id}/checks`)).body;
     expect(stored.tyres.readings.map((r: { reading: { position: string } }) => r.reading.position)).toEqual(["front_left", "front_right", "rear_left", "rear_right"]);
     expect(stored.tyres.measuredOn).toBe("2025-06-20");
     expect(stored.checks.results.map((r: { item: string; result: string }) => `${r.item}:${r.result}`).sort()).toEqual(["brakes:fail", "climate:advise", "lights:pass"]);
@@ -160,12 +140,12 @@ describe("tyres and checks on a phone in Chromium", () => {
 
   it("when someone else saves first, then the form says so, keeps what was typed, and loads theirs only when asked", async () => {
     const id = await stockedVehicle();
-    const page = await browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
+    const page = await world.browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
     await signIn(page, "workshop@demo.test");
-    await page.goto(`${server.url}/app/vehicles/${id}/checks`);
+    await page.goto(`${world.url}/app/vehicles/${id}/checks`);
     await tyre(page, "Front left").getByLabel("Front left inner tread").fill("6.2");
     // Another workshop phone saves the same vehicle's tyres meanwhile.
-    const other = await t.signIn("workshop");
+    const other = await world.t.signIn("workshop");
     const theirs = await other.put(`/api/vehicles/${id}/tyres`).send({ version: 0, measuredOn: "2025-06-20", readings: [{ position: "front_left", treadInnerMm: 7.0 }] });
     expect(theirs.status).toBe(200);
     await page.getByRole("button", { name: "Save tyres" }).click();
@@ -179,9 +159,9 @@ describe("tyres and checks on a phone in Chromium", () => {
 
   it("when a reading is wrong, then the field says why before anything is sent", async () => {
     const id = await stockedVehicle();
-    const page = await browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
+    const page = await world.browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
     await signIn(page, "workshop@demo.test");
-    await page.goto(`${server.url}/app/vehicles/${id}/checks`);
+    await page.goto(`${world.url}/app/vehicles/${id}/checks`);
     const card = tyre(page, "Front left");
     await card.getByLabel("Front left inner tread").fill("4.95");
     await card.getByLabel("Front left centre tread").fill("40");
@@ -190,15 +170,15 @@ describe("tyres and checks on a phone in Chromium", () => {
     // The shared schema's own limit (shared/schemas/evidence.ts: at most 30 mm).
     expect(await card.getByText("Centre tread is at most 30 mm.").count()).toBe(1);
     expect(await card.getByLabel("Front left inner tread").inputValue()).toBe("4.95");
-    expect((await (await t.signIn("workshop")).get(`/api/vehicles/${id}/checks`)).body.tyres.version).toBe(0);
+    expect((await (await world.t.signIn("workshop")).get(`/api/vehicles/${id}/checks`)).body.tyres.version).toBe(0);
     await page.close();
   });
 
   it("when marketing opens the screen, then everything reads but nothing can be changed or saved", async () => {
     const id = await stockedVehicle();
-    const page = await browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
+    const page = await world.browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
     await signIn(page, "marketing@demo.test");
-    await page.goto(`${server.url}/app/vehicles/${id}/checks`);
+    await page.goto(`${world.url}/app/vehicles/${id}/checks`);
     await expect.poll(() => page.getByText("Your role can read the tyres and checks").count()).toBe(1);
     expect(await tyre(page, "Front left").getByLabel("Front left inner tread").isDisabled()).toBe(true);
     expect(await checkRow(page, /^Brakes/).getByRole("radio", { name: "Fail" }).isDisabled()).toBe(true);

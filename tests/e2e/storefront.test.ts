@@ -1,26 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { e2eWorld } from "../support/e2e.ts";
+import type { Page } from "playwright-core";
 import { mkdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
-import { startTestApp, type TestApp } from "../support/app.ts";
-import { imagesSettled, launchBrowser, RESULTS_DIR, screenshot, watchErrors } from "../support/browser.ts";
-import { listen } from "../support/http-server.ts";
+import { imagesSettled, RESULTS_DIR, screenshot, watchErrors } from "../support/browser.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
 
-let t: TestApp;
-let browser: Browser;
-let server: Awaited<ReturnType<typeof listen>>;
-
-beforeAll(async () => {
-  t = await startTestApp();
-  server = await listen(t.app);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  await t?.close();
-});
+const world = e2eWorld();
 
 /**
  * Staff code never reaches a buyer. The staff chunks are named after their modules: StaffShell, VehicleEditor,
@@ -51,13 +37,13 @@ function savePdf(name: string, pdf: Buffer) {
 
 describe("a buyer on the public pages", () => {
   it("when a ready vehicle is published, then a buyer finds it by its model, reads its condition report, prints it and its window card, and no staff code loads", async () => {
-    const { slug } = await publishReadyVehicle(t);
-    const page = await browser.newPage({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 1 });
+    const { slug } = await publishReadyVehicle(world.t);
+    const page = await world.browser.newPage({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 1 });
     const errors = watchErrors(page);
     const scripts = watchScripts(page);
 
     // The storefront: search by the model; the whole view is in the URL, so back and forward walk through it.
-    await page.goto(`${server.url}/`);
+    await page.goto(`${world.url}/`);
     await expect.poll(() => page.getByRole("heading", { level: 1, name: "Vehicles for sale" }).count()).toBe(1);
     await page.getByLabel("Search by make, model or words in the listing").fill("Loam");
     await page.getByRole("button", { name: "Search", exact: true }).click();
@@ -67,7 +53,7 @@ describe("a buyer on the public pages", () => {
     expect(await noSideScroll(page)).toBe(true);
     await screenshot(page, "storefront-phone");
     await page.goBack();
-    await page.waitForURL(`${server.url}/`);
+    await page.waitForURL(`${world.url}/`);
     await expect.poll(() => page.getByLabel("Search by make, model or words in the listing").inputValue()).toBe("");
     await page.goForward();
     await page.waitForURL(/[?&]q=Loam/);
@@ -76,7 +62,7 @@ describe("a buyer on the public pages", () => {
 
     // The condition page.
     await card.click();
-    await page.waitForURL(`${server.url}/vehicles/${slug}`);
+    await page.waitForURL(`${world.url}/vehicles/${slug}`);
     await expect.poll(() => page.getByRole("heading", { level: 1 }).innerText()).toMatch(/Loam/);
     await expect.poll(() => page.title()).toMatch(/Loam.*—/);
     // 68 L at 8.8 L/100 km = 772.7 km, shown as 773 km (common practice, no source).
@@ -150,7 +136,7 @@ describe("a buyer on the public pages", () => {
 
     // The window card, from the page's own link.
     await page.getByRole("link", { name: "Window card" }).first().click();
-    await page.waitForURL(`${server.url}/vehicles/${slug}/card`);
+    await page.waitForURL(`${world.url}/vehicles/${slug}/card`);
     await expect.poll(() => page.getByRole("heading", { level: 1 }).innerText()).toMatch(/Loam/);
     const qr = page.getByRole("img", { name: /^QR code to the full condition report/ });
     expect(await qr.getAttribute("src")).toBe(`/api/public/vehicles/${slug}/qr.svg`);
@@ -176,9 +162,9 @@ describe("a buyer on the public pages", () => {
   });
 
   it("when an address was never published, then the buyer gets a plain not-found page with a way to the stock", async () => {
-    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    const page = await world.browser.newPage({ viewport: { width: 390, height: 844 } });
     const errors = watchErrors(page);
-    await page.goto(`${server.url}/vehicles/never-published-here`);
+    await page.goto(`${world.url}/vehicles/never-published-here`);
     await expect.poll(() => page.getByRole("heading", { level: 1 }).innerText()).toBe("We could not find this vehicle");
     expect(await page.getByRole("link", { name: "See the vehicles for sale" }).getAttribute("href")).toBe("/");
     // The 404 answer itself is logged by Chromium as a failed resource.

@@ -1,21 +1,10 @@
 import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { createServer } from "node:net";
+import { freePort } from "./ports.ts";
 import type { TestProject } from "vitest/node";
 import { ensureMariadbInstalled, instanceFor, removeDataDir, startMariadb, stopMariadb } from "../../server/db/mariadb.ts";
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.unref();
-    srv.on("error", reject);
-    srv.listen(0, "127.0.0.1", () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => resolve(port));
-    });
-  });
-}
 
 /** One throwaway MariaDB for the whole run, on a free port in a temporary directory; each test file makes its own database. */
 export default async function setup(project: TestProject) {
