@@ -1,4 +1,4 @@
-import { and, desc, eq } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import type { DbOrTx } from "../../db/client.ts";
@@ -11,7 +11,7 @@ import { findVehicle } from "../vehicles/vehicles.queries.ts";
 import { deriveFor } from "../vehicles/derive.ts";
 import { readiness, type Readiness } from "../../../shared/domain/readiness.ts";
 import { validateVinStructure, vinCheck } from "../../../shared/domain/vin.ts";
-import { allRoadTyresMeasured, ROAD_POSITIONS } from "../../../shared/domain/tyre-assessment.ts";
+import { ROAD_POSITIONS } from "../../../shared/domain/tyre-assessment.ts";
 import { describeChanges } from "../../../shared/domain/revision-changes.ts";
 import type { VehicleStatus } from "../../../shared/constants/vehicle.ts";
 import { buildSnapshot, mediaKeysOf } from "./snapshot.ts";
@@ -128,5 +128,3 @@ export async function publishingOf(db: DbOrTx, v: Vehicle, d: Dealership, eviden
     revisions: list.map((r) => ({ ...r, publishedAt: r.publishedAt.toISOString() })),
   };
 }
-
-export { allRoadTyresMeasured, and };

@@ -6,7 +6,7 @@ import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { Panel } from "../../../components/ui/Page.tsx";
 import { MARKET_CODES, type MarketCode } from "../../../../shared/constants/market.ts";
-import { MARKET_PRESETS } from "../../../../shared/constants/market-presets.ts";
+import { MARKETS } from "../../../../shared/domain/markets.ts";
 
 type Form = Record<string, string | boolean>;
 
@@ -32,13 +32,13 @@ export function SettingsForm({ dealership }: { dealership: DealershipView }) {
   });
 
   function applyMarket(code: MarketCode) {
-    const p = MARKET_PRESETS[code];
+    const p = MARKETS[code];
     setForm({
       ...form,
       market: code,
       distanceUnit: p.distanceUnit,
       currency: p.currency,
-      legalMinTreadMm: String(p.legalMinTreadMm),
+      legalMinTreadMm: String(p.legalMinimumTreadMm),
       vinCheckDigitMandatory: p.vinCheckDigitMandatory,
     });
   }
@@ -58,7 +58,7 @@ export function SettingsForm({ dealership }: { dealership: DealershipView }) {
     });
   }
 
-  const preset = MARKET_PRESETS[form.market as MarketCode];
+  const preset = MARKETS[form.market as MarketCode];
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-6">
       {saved ? <Notice tone="success" title="Settings saved" /> : null}
@@ -82,9 +82,9 @@ export function SettingsForm({ dealership }: { dealership: DealershipView }) {
       </Panel>
       <Panel title="Market rules">
         <div className="grid gap-4 sm:grid-cols-2">
-          <SelectField label="Market" name="market" value={String(form.market)} onChange={(e) => applyMarket(e.target.value as MarketCode)} error={fields.market} hint={preset ? `Tread minimum from ${preset.treadSource}.` : undefined}>
+          <SelectField label="Market" name="market" value={String(form.market)} onChange={(e) => applyMarket(e.target.value as MarketCode)} error={fields.market} hint={preset ? `Tread minimum from ${preset.treadSource.replace(/\s*\(TRADE\.md[^)]*\)/, "")}.` : undefined}>
             {MARKET_CODES.map((m) => (
-              <option key={m} value={m}>{MARKET_PRESETS[m].label}</option>
+              <option key={m} value={m}>{MARKETS[m].name}</option>
             ))}
           </SelectField>
           <SelectField label="Distance unit" {...text("distanceUnit")}>
