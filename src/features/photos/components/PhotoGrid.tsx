@@ -1,7 +1,7 @@
 import { useState, type DragEvent, type KeyboardEvent } from "react";
 import { useDeletePhoto, useReorderPhotos, useUpdatePhoto, type PhotoView } from "../api/photos.ts";
 import { ZONES, ZONE_LABELS } from "../../../../shared/constants/evidence.ts";
-import { Picture } from "./Picture.tsx";
+import { Picture } from "../../../components/ui/Picture.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 
 /** Arrange the photos: drag to reorder or use the move buttons (and Alt+arrow keys), choose the cover, caption, zone, delete. */

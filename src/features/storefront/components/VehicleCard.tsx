@@ -3,7 +3,7 @@ import type { PublicVehicleCard } from "../../../../shared/schemas/public.ts";
 import { formatConditionIndex } from "../../../../shared/domain/display.ts";
 import { count, label, odometerText, priceText, rangeText, yearText, zoneLabel } from "../format.ts";
 import { Qty } from "./Figure.tsx";
-import { PublicPicture } from "./PublicPicture.tsx";
+import { Picture } from "../../../components/ui/Picture.tsx";
 import { StatusWord } from "./SiteChrome.tsx";
 
 /** One vehicle on the storefront. The whole card is the link; the figures line up in tabular digits. */
@@ -21,7 +21,7 @@ export function VehicleCard({ card, index, locale, distanceUnit }: { card: Publi
     <article className="relative flex flex-col overflow-hidden rounded-lg border border-line bg-paper-raised has-[a:focus-visible]:outline-3 has-[a:focus-visible]:outline-offset-2 has-[a:focus-visible]:outline-signal has-[a:hover]:border-line-strong">
       <div className="relative aspect-[4/3] bg-paper-sunk">
         {card.cover ? (
-          <PublicPicture
+          <Picture
             photo={card.cover}
             alt={card.cover.caption.trim() || `${card.title}${card.cover.zone ? `, ${zoneLabel(card.cover.zone).toLowerCase()}` : ""}`}
             sizes="(min-width: 1024px) 360px, (min-width: 640px) 50vw, 100vw"

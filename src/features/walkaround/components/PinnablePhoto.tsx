@@ -1,6 +1,6 @@
 import type { MouseEvent } from "react";
 import type { PhotoView } from "../../photos/api/photos.ts";
-import { Picture } from "../../photos/components/Picture.tsx";
+import { Picture } from "../../../components/ui/Picture.tsx";
 import type { DefectView } from "../api/walkaround.ts";
 import { DefectPin } from "./DefectPin.tsx";
 import { DEFECT_KIND_LABELS, SEVERITY_LABELS, type Severity } from "../../../../shared/constants/evidence.ts";

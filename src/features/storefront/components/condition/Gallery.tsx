@@ -2,7 +2,8 @@ import { useEffect, useRef, useState, type KeyboardEvent, type PointerEvent } fr
 import type { PublicPhoto } from "../../../../../shared/schemas/public.ts";
 import { formatNumber } from "../../../../../shared/domain/display.ts";
 import { zoneLabel } from "../../format.ts";
-import { photoAlt, PublicPicture } from "../PublicPicture.tsx";
+import { photoAlt } from "../photo-alt.ts";
+import { Picture } from "../../../../components/ui/Picture.tsx";
 
 /**
  * The photos: one large, the rest as a strip of thumbnails. The stage keeps the cover's proportions whatever photo
@@ -75,7 +76,7 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
           className="fr-stage relative touch-pan-y overflow-hidden rounded-lg border border-line bg-paper-sunk"
           style={{ aspectRatio: `${cover.width} / ${cover.height}` }}
         >
-          <PublicPicture
+          <Picture
             key={index}
             photo={photo}
             alt={alt(index)}
@@ -120,7 +121,7 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
                 className={`block w-20 overflow-hidden rounded-md border-2 sm:w-24 ${i === index ? "border-ink" : "border-transparent opacity-85 hover:opacity-100"}`}
               >
                 <span className="block aspect-[4/3]">
-                  <PublicPicture photo={p} alt="" sizes="96px" fill="cover" />
+                  <Picture photo={p} alt="" sizes="96px" fill="cover" />
                 </span>
               </button>
             </li>

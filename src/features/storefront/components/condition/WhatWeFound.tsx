@@ -3,7 +3,7 @@ import type { PublicDefect, PublicPhoto, PublicSnapshot } from "../../../../../s
 import { formatConditionIndex, formatNumber, withUnit } from "../../../../../shared/domain/display.ts";
 import { SEVERITIES, ZONES } from "../../../../../shared/constants/evidence.ts";
 import { count, dateText, kindLabel, plural, repairPlanLabel, severityLabel, zoneLabel } from "../../format.ts";
-import { PublicPicture } from "../PublicPicture.tsx";
+import { Picture } from "../../../../components/ui/Picture.tsx";
 import { DefectNumber, DefectPinButton, defectName } from "./DefectMark.tsx";
 import { Section } from "./Section.tsx";
 
@@ -162,7 +162,7 @@ function DefectMap({
           return (
             <figure key={photoIndex} className="fr-map-photo">
               <div className="relative overflow-hidden rounded-md border border-line">
-                <PublicPicture
+                <Picture
                   photo={photo}
                   alt={`${where}, with ${plural(pins.length, "a numbered pin", "numbered pins")} for ${plural(pins.length, "item", "items")} ${pins.map((d) => d.number).join(", ")}`}
                   sizes="(min-width: 1024px) 55vw, 100vw"

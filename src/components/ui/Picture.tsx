@@ -1,12 +1,15 @@
 import { useState } from "react";
-import type { PublicPhoto } from "../../../../shared/schemas/public.ts";
+import type { PublicPhoto } from "../../../shared/schemas/public.ts";
+
+/** What a picture needs: a served photo, public (a revision) or staff (a photo being worked on). */
+export type PictureSource = Pick<PublicPhoto, "src" | "srcsetAvif" | "srcsetWebp" | "srcsetJpeg" | "width" | "height" | "placeholder">;
 
 /**
- * A published photo: AVIF, then WebP, then JPEG, each a srcset of widths; width and height set so the page never
+ * A photo: AVIF, then WebP, then JPEG, each a srcset of widths; width and height set so the page never
  * shifts; the tiny placeholder painted until the real image arrives. Lazy unless `eager` (only the first image of a
  * page is). With `fill` the image covers or fits the box its parent sets (the parent fixes the aspect ratio).
  */
-export function PublicPicture({
+export function Picture({
   photo,
   alt,
   sizes = "100vw",
@@ -15,7 +18,7 @@ export function PublicPicture({
   fill,
   className = "",
 }: {
-  photo: PublicPhoto;
+  photo: PictureSource;
   alt: string;
   sizes?: string;
   eager?: boolean;
@@ -26,7 +29,8 @@ export function PublicPicture({
   const [loaded, setLoaded] = useState(false);
   const fit = fill === "cover" ? "h-full w-full object-cover" : fill === "contain" ? "h-full w-full object-contain" : "h-auto w-full";
   return (
-    <picture className={fill ? "block h-full w-full" : "block"}>
+    // A new element when the sizes arrive (processing → ready), rather than swapping sources under a loaded image.
+    <picture key={photo.srcsetAvif || photo.src} className={fill ? "block h-full w-full" : "block"}>
       {photo.srcsetAvif ? <source type="image/avif" srcSet={photo.srcsetAvif} sizes={sizes} /> : null}
       {photo.srcsetWebp ? <source type="image/webp" srcSet={photo.srcsetWebp} sizes={sizes} /> : null}
       <img
@@ -53,8 +57,3 @@ export function PublicPicture({
   );
 }
 
-/** Alt text from what staff wrote, else the zone, else the place in the set. */
-export function photoAlt(photo: PublicPhoto, index: number, total: number, zoneName: (zone: string) => string): string {
-  const what = photo.caption.trim() || (photo.zone ? `${zoneName(photo.zone)} of the vehicle` : "The vehicle");
-  return total > 1 ? `${what} (photo ${index + 1} of ${total})` : what;
-}
