@@ -2,23 +2,21 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import { ORIGIN, startTestApp, type TestApp } from "../support/app.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
-import { startFakeSmtp } from "../../server/modules/mail/fake-smtp.ts";
+import { catchMail } from "../support/mail.ts";
 import { defaultLimits } from "../../server/middleware/rate-limit.ts";
 
 let t: TestApp;
-let smtp: Awaited<ReturnType<typeof startFakeSmtp>> | null;
+let mail: Awaited<ReturnType<typeof catchMail>>;
 let slug: string;
 let vehicleId: number;
 
 beforeAll(async () => {
   t = await startTestApp();
-  smtp = await startFakeSmtp(t.ctx.database, 0);
-  t.ctx.mail.retarget({ port: smtp.port });
+  mail = await catchMail(t);
   ({ slug, vehicleId } = await publishReadyVehicle(t));
 });
 afterAll(async () => {
-  await t.ctx.mail.stop();
-  await smtp?.close();
+  await mail.close();
   await t.close();
 });
 
@@ -36,11 +34,7 @@ const enquiry = (over: Record<string, unknown> = {}) => ({
   ...over,
 });
 
-async function captured() {
-  await t.ctx.mail.settled();
-  const [rows] = await t.ctx.database.pool.query("select to_address as `to`, subject, text, html from captured_mail order by id");
-  return rows as Array<{ to: string; subject: string; text: string; html: string }>;
-}
+const captured = () => mail.captured();
 const leadCount = async () => Number(((await t.ctx.database.pool.query("select count(*) as n from leads"))[0] as Array<{ n: number }>)[0]!.n);
 
 describe("a buyer's enquiry", () => {
@@ -90,8 +84,7 @@ describe("a buyer's enquiry", () => {
   });
 
   it("when the SMTP server is down, then the enquiry is still stored, and the buyer's confirmation arrives once it is back", async () => {
-    await smtp!.close();
-    smtp = null;
+    await mail.down();
     const res = await request(t.app).post(`/api/public/vehicles/${slug}/enquiries`).set("Origin", ORIGIN).send(enquiry({ name: "Ari Vance", email: "ari.vance@example.test" }));
     expect(res.status).toBe(201);
     await t.ctx.mail.settled();
@@ -99,8 +92,7 @@ describe("a buyer's enquiry", () => {
     const [pending] = (await t.ctx.database.pool.query("select to_address as t, status, attempts, last_error as e from outbox where status = 'pending'")) as unknown as [Array<{ t: string; attempts: number; e: string | null }>];
     expect(pending.some((p) => p.t === "ari.vance@example.test")).toBe(true);
     expect(pending.some((p) => p.attempts >= 1 && p.e)).toBe(true);
-    smtp = await startFakeSmtp(t.ctx.database, 0);
-    t.ctx.mail.retarget({ port: smtp.port });
+    await mail.up();
     await t.ctx.mail.retryNow();
     await t.ctx.mail.settled();
     // Two mails may have been waiting (staff and buyer); drain until both are out.

@@ -1,25 +1,22 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { readdirSync, readFileSync, statSync } from "node:fs";
-import path from "node:path";
 import request from "supertest";
 import type { Browser, Page } from "playwright-core";
 import { DEMO_PASSWORD, ORIGIN, startTestApp, type TestApp } from "../support/app.ts";
 import { launchBrowser, screenshot, watchErrors } from "../support/browser.ts";
 import { listen } from "../support/http-server.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
-import { startFakeSmtp } from "../../server/modules/mail/fake-smtp.ts";
+import { catchMail } from "../support/mail.ts";
 
 let t: TestApp;
 let browser: Browser;
 let server: Awaited<ReturnType<typeof listen>>;
-let smtp: Awaited<ReturnType<typeof startFakeSmtp>>;
+let mail: Awaited<ReturnType<typeof catchMail>>;
 let slug: string;
 let vehicleId: number;
 
 beforeAll(async () => {
   t = await startTestApp();
-  smtp = await startFakeSmtp(t.ctx.database, 0);
-  t.ctx.mail.retarget({ port: smtp.port });
+  mail = await catchMail(t);
   ({ slug, vehicleId } = await publishReadyVehicle(t));
   // As if an admin had taken the vehicle in: its enquiries reach the dealership's inbox unassigned, for sales to take.
   await t.ctx.database.pool.query("update vehicles set salesperson_id = null where id = ?", [vehicleId]);
@@ -29,8 +26,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
   await server?.close();
-  await t?.ctx.mail.stop();
-  await smtp?.close();
+  await mail?.close();
   await t?.close();
 });
 
@@ -42,25 +38,7 @@ async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
   await page.waitForURL(`${server.url}/app`);
 }
 
-async function captured() {
-  await t.ctx.mail.settled();
-  const [rows] = await t.ctx.database.pool.query("select to_address as `to`, subject, text from captured_mail order by id");
-  return rows as Array<{ to: string; subject: string; text: string }>;
-}
-
-/** Whether the storefront already places the form on the condition page (another engineer wires it in). */
-function storefrontHasForm() {
-  const walk = (dir: string): string[] =>
-    readdirSync(dir).flatMap((f) => {
-      const p = path.join(dir, f);
-      return statSync(p).isDirectory() ? walk(p) : [p];
-    });
-  try {
-    return walk(path.resolve("src/features/storefront")).some((f) => /<EnquiryForm\b/.test(readFileSync(f, "utf8")));
-  } catch {
-    return false;
-  }
-}
+const captured = () => mail.captured();
 
 const enquiry = (over: Record<string, unknown> = {}) => ({
   name: "Jo Marlowe",
@@ -237,7 +215,7 @@ describe("account pages in Chromium", () => {
   });
 });
 
-describe.skipIf(!storefrontHasForm())("the buyer's enquiry on a phone", () => {
+describe("the buyer's enquiry on a phone", () => {
   it("when a buyer sends a question from the condition page, then every problem shows at once, nothing typed is lost, and a thank-you says what happens next", async () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const errors = watchErrors(page);
