@@ -14,15 +14,34 @@ export function parseOr400<S extends z.ZodType>(schema: S, value: unknown, what 
   return result.data;
 }
 
-type Part = "body" | "query" | "params";
+export type Part = "body" | "query" | "params";
+
+/** What a validator checks, kept on the middleware so the route inventory (tests/support/routes.ts) can read it. */
+export interface ValidatorInfo {
+  part: Part;
+  schema: z.ZodType;
+}
+
+/**
+ * The key under which `validate()` keeps its ValidatorInfo. A symbol and a non-enumerable property, so nothing that
+ * copies or logs the function sees it; only code that asks with `validatorInfo()` does.
+ */
+const VALIDATES = Symbol.for("forthright.validates");
+
+/** The part and schema a middleware returned by `validate()` checks, or undefined for any other function. */
+export function validatorInfo(fn: unknown): ValidatorInfo | undefined {
+  return typeof fn === "function" ? ((fn as unknown as Record<symbol, ValidatorInfo | undefined>)[VALIDATES] ?? undefined) : undefined;
+}
 
 /**
  * Validates one part of the request and keeps the parsed value on `res.locals[part]` (Express 5 makes
  * `req.query` read-only), so handlers read typed input and never the raw request.
  */
 export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHandler {
-  return (req, res, next) => {
+  const middleware: RequestHandler = (req, res, next) => {
     res.locals[part] = parseOr400(schema, req[part] ?? {}, part === "body" ? "form" : part);
     next();
   };
+  Object.defineProperty(middleware, VALIDATES, { value: { part, schema } satisfies ValidatorInfo, enumerable: false });
+  return middleware;
 }
