@@ -7,18 +7,21 @@
  */
 import { mkdirSync, mkdtempSync, readdirSync, writeFileSync } from "node:fs";
 import { randomBytes } from "node:crypto";
-import { cpus, tmpdir } from "node:os";
+import { spawnSync } from "node:child_process";
+import { cpus, loadavg, release as osRelease, tmpdir, totalmem, type as osType } from "node:os";
 import path from "node:path";
 import { freePort } from "../support/ports.ts";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import {
-  databaseUrl, dropDatabase, ensureMariadbInstalled, instanceFor, provisionDatabase, removeDataDir, startMariadb, stopMariadb,
+  databaseUrl, dropDatabase, ensureMariadbInstalled, findBinary, instanceFor, provisionDatabase, removeDataDir, startMariadb, stopMariadb,
   type MariadbInstance,
 } from "../../server/db/mariadb.ts";
 import type { BenchDatabase, BenchEnv, BenchModule, BenchResult } from "./types.ts";
 
 const BENCH_DIR = path.dirname(fileURLToPath(import.meta.url));
 const REPORT = path.resolve("test-results/bench-report.md");
+/** The committed copy the README links; only a run of every bench writes it. */
+const DOCS_REPORT = path.resolve("docs/benchmarks.md");
 
 
 async function loadBenches(words: string[]): Promise<BenchModule[]> {
@@ -36,19 +39,22 @@ async function loadBenches(words: string[]): Promise<BenchModule[]> {
 }
 
 const num = (n: number) => (!Number.isFinite(n) ? String(n) : Math.abs(n) >= 100 ? n.toFixed(0) : Math.abs(n) >= 10 ? n.toFixed(1) : n.toFixed(2));
-const ratioOf = (r: BenchResult) => (r.baseline ? `${(r.value / r.baseline).toFixed(2)}×` : "—");
+/** Every ratio reads "times worse than the baseline": value / baseline, or baseline / value where more is better. */
+const ratioOf = (r: BenchResult) => (r.baseline ? `${(r.higherIsBetter ? r.baseline / r.value : r.value / r.baseline).toFixed(2)}×` : "—");
+const ratioIs = (r: BenchResult) => (r.baseline === undefined ? "" : r.higherIsBetter ? "base ÷ ours" : "ours ÷ base");
 
 function rowsOf(results: BenchResult[]): string[][] {
   return results.map((r) => [
-    r.figure,
-    `${num(r.value)} ${r.unit}`,
-    r.baseline === undefined ? "—" : `${num(r.baseline)} ${r.unit}${r.baselineLabel ? ` (${r.baselineLabel})` : ""}`,
+    r.failed ? `FAILED ${r.figure}` : r.figure,
+    `${num(r.value)} ${r.unit}`.trim(),
+    r.baseline === undefined ? "—" : `${num(r.baseline)} ${r.unit}${r.baselineLabel ? ` (${r.baselineLabel})` : ""}`.replace(/ +\(/, " ("),
     ratioOf(r),
+    ratioIs(r),
     String(r.samples),
   ]);
 }
 
-const HEAD = ["figure", "value", "baseline", "ratio", "samples"];
+const HEAD = ["figure", "ours", "baseline", "ratio", "ratio is", "samples"];
 
 function textTable(rows: string[][]): string {
   const widths = HEAD.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
@@ -56,24 +62,71 @@ function textTable(rows: string[][]): string {
   return [line(HEAD), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
 }
 
-function markdown(outcomes: Array<{ name: string; results: BenchResult[]; error?: string; seconds: number }>): string {
+interface Outcome {
+  name: string;
+  results: BenchResult[];
+  error?: string;
+  seconds: number;
+}
+
+/** Cores, CPU model, memory, node and MariaDB: what a reader needs to compare two reports. */
+function machine(): string[] {
+  const mariadbd = findBinary("mariadbd");
+  const mariadb = mariadbd ? (spawnSync(mariadbd, ["--version"], { encoding: "utf8" }).stdout ?? "").match(/Ver\s+(\S+)/)?.[1] ?? "unknown" : "not found";
+  const cpu = cpus();
+  return [
+    `- date: ${new Date().toISOString()}`,
+    `- machine: ${cpu.length} cores (${cpu[0]?.model.trim() ?? "unknown CPU"}), ${(totalmem() / 2 ** 30).toFixed(1)} GiB memory, ${osType()} ${osRelease()}; load average at the end ${loadavg().map((l) => l.toFixed(2)).join(" ")}`,
+    `- node ${process.version}, MariaDB ${mariadb}`,
+  ];
+}
+
+const esc = (s: string) => s.replace(/\|/g, "\\|").replace(/\n/g, " ");
+
+function markdown(outcomes: Outcome[], words: string[]): string {
+  const failed = outcomes.filter((o) => o.error || o.results.some((r) => r.failed));
   const out = [
-    "# Bench report",
+    "# Benchmarks",
     "",
-    `${new Date().toISOString()} · node ${process.version} · ${cpus().length} cores. Ratios are value / baseline, both measured in this run.`,
+    `Written by \`npm run bench${words.length ? ` -- ${words.join(" ")}` : ""}\` (tests/bench/run.ts).`,
     "",
-    "| bench | figure | value | baseline | ratio | samples |",
-    "|---|---|---:|---:|---:|---:|",
+    ...machine(),
+    `- benches: ${outcomes.map((o) => `${o.name} (${o.seconds.toFixed(0)} s)`).join(", ")}; ${failed.length ? `**${failed.length} with failures: ${failed.map((o) => o.name).join(", ")}**` : "no failures"}`,
+    "",
+    "## How to read it",
+    "",
+    "- Every figure is measured against a baseline taken **in the same run** on the same machine (a plain node:http",
+    "  server answering the same bytes, bare mysql2 or bare sharp doing the same work, or a stated aim). The machine is",
+    "  shared and small, so absolute numbers move from run to run; the ratios are what to compare between reports.",
+    "- **ratio** is always \"times worse than the baseline\": ours ÷ baseline for times, sizes and memory, baseline ÷ ours",
+    "  for requests/s and scores (the *ratio is* column says which). 1.00× is as good as the baseline; 3.00× means three",
+    "  times slower, bigger or fewer; below 1 means better than the baseline (usual against an aim).",
+    "- A row starting **FAILED** is a correctness failure under load (errors, timeouts, non-2xx answers), whatever its",
+    "  speed; a bench that failed outright is listed with its error. The run then exits 1.",
+    "- Latency percentiles from autocannon are whole milliseconds; a baseline under 1 ms is shown as 1 ms, and the ratio is",
+    "  then a lower bound.",
+    "",
   ];
   for (const o of outcomes) {
-    for (const row of rowsOf(o.results)) out.push(`| ${o.name} | ${row.join(" | ")} |`);
-    if (o.error) out.push(`| ${o.name} | **failed**: ${o.error.replace(/\|/g, "\\|").replace(/\n/g, " ")} | | | | |`);
+    out.push(`## ${o.name}`, "", `${o.results.length} figures in ${o.seconds.toFixed(0)} s.`, "");
+    if (o.results.length) {
+      out.push(`| ${HEAD.join(" | ")} |`, "|---|---:|---:|---:|---|---:|");
+      for (const [i, row] of rowsOf(o.results).entries()) {
+        const r = o.results[i]!;
+        const cells = row.map(esc);
+        if (r.failed) cells[0] = `**FAILED** ${esc(r.figure)}: ${esc(r.failed)}`;
+        out.push(`| ${cells.join(" | ")} |`);
+      }
+      out.push("");
+    }
+    if (o.error) out.push(`**failed**: ${esc(o.error)}`, "");
   }
-  return out.join("\n") + "\n";
+  return out.join("\n");
 }
 
 async function main(): Promise<number> {
-  const benches = await loadBenches(process.argv.slice(2));
+  const words = process.argv.slice(2);
+  const benches = await loadBenches(words);
   ensureMariadbInstalled();
   const instance: MariadbInstance = instanceFor(mkdtempSync(path.join(tmpdir(), "forthright-bench-db-")), await freePort());
   const created = new Set<string>();
@@ -105,7 +158,7 @@ async function main(): Promise<number> {
     void cleanup().finally(() => process.exit(1));
   });
 
-  const outcomes: Array<{ name: string; results: BenchResult[]; error?: string; seconds: number }> = [];
+  const outcomes: Outcome[] = [];
   try {
     await startMariadb(instance);
     console.log(`MariaDB on 127.0.0.1:${instance.port} (${instance.dataDir})`);
@@ -141,10 +194,18 @@ async function main(): Promise<number> {
     await cleanup();
   }
 
+  const report = markdown(outcomes, words);
   mkdirSync(path.dirname(REPORT), { recursive: true });
-  writeFileSync(REPORT, markdown(outcomes));
+  writeFileSync(REPORT, report);
   console.log(`\nwrote ${path.relative(process.cwd(), REPORT)}`);
-  return outcomes.some((o) => o.error) ? 1 : 0;
+  if (!words.length && !stopping) {
+    mkdirSync(path.dirname(DOCS_REPORT), { recursive: true });
+    writeFileSync(DOCS_REPORT, report);
+    console.log(`wrote ${path.relative(process.cwd(), DOCS_REPORT)} (a full run)`);
+  }
+  const failures = outcomes.flatMap((o) => [...(o.error ? [`${o.name}: ${o.error}`] : []), ...o.results.filter((r) => r.failed).map((r) => `${o.name}: ${r.figure}: ${r.failed}`)]);
+  for (const f of failures) console.error(`FAILED ${f}`);
+  return failures.length ? 1 : 0;
 }
 
 main().then(

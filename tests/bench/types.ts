@@ -31,6 +31,13 @@ export interface BenchResult {
   baseline?: number;
   /** What the baseline is, e.g. "bare mysql2". */
   baselineLabel?: string;
+  /**
+   * True for figures where more is better (requests/s, a score): the ratio is then baseline / value, so that in
+   * every row a ratio above 1 means ours is worse than the baseline by that factor.
+   */
+  higherIsBetter?: boolean;
+  /** Set when the figure itself is a failure (errors, non-2xx …): the report marks the row and the run exits 1. */
+  failed?: string;
   /** How many samples the figure (and its baseline) came from. */
   samples: number;
 }
