@@ -15,13 +15,18 @@ export function createLogger(config: Config): Logger {
   return pino({ level: config.LOG_LEVEL, redact: ["req.headers.cookie", "req.headers.authorization"] });
 }
 
+/** The boot's durability rule on the server's answer: anything but 1 can lose acknowledged commits in a crash. */
+export function assertDurable(flushLogAtTrxCommit: unknown): void {
+  const value = Number(flushLogAtTrxCommit);
+  if (value !== 1) {
+    throw new Error(`MariaDB has innodb_flush_log_at_trx_commit=${String(flushLogAtTrxCommit)}; Forthright needs 1 so no acknowledged write is lost.`);
+  }
+}
+
 /** Every acknowledged commit must survive a crash; refuse to run on a server configured otherwise. */
 async function checkDurability(ctx: AppContext) {
   const [rows] = (await ctx.database.db.execute(sql`select @@innodb_flush_log_at_trx_commit as v`)) as unknown as [Array<{ v: number }>];
-  const value = Number(rows[0]?.v);
-  if (value !== 1) {
-    throw new Error(`MariaDB has innodb_flush_log_at_trx_commit=${value}; Forthright needs 1 so no acknowledged write is lost.`);
-  }
+  assertDurable(rows[0]?.v);
 }
 
 /** Serialises migrations between instances that start together. */

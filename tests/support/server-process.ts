@@ -1,0 +1,238 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import request from "supertest";
+import { pino } from "pino";
+import { createApp } from "../../server/app.ts";
+import { createContext } from "../../server/lib/boot.ts";
+import { seedDemo, DEMO_USERS } from "../../server/db/seed/demo.ts";
+import type { Role } from "../../shared/constants/roles.ts";
+import { DEMO_PASSWORD, ORIGIN, type TestApp } from "./app.ts";
+import { createTestDatabase } from "./database.ts";
+import { SESSION_COOKIE } from "../../server/modules/auth/lucia.ts";
+import { freePort } from "./ports.ts";
+
+const ROOT = fileURLToPath(new URL("../..", import.meta.url));
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+/**
+ * The real server (`node --import tsx server/index.ts`) as a child process, so a test can SIGKILL it in the middle
+ * of a write and start it again with the same settings. Its output is kept (the last 200 lines) for failure messages.
+ */
+export class ServerProcess {
+  readonly url: string;
+  private child: ChildProcess | null = null;
+  private exited: Promise<{ code: number | null; signal: NodeJS.Signals | null }> = Promise.resolve({ code: null, signal: null });
+  private lines: string[] = [];
+  /** How many times this server was started. */
+  starts = 0;
+
+  constructor(
+    readonly port: number,
+    private readonly env: NodeJS.ProcessEnv,
+  ) {
+    this.url = `http://127.0.0.1:${port}`;
+  }
+
+  get running() {
+    return this.child !== null;
+  }
+
+  /** The server's own output, most recent last. */
+  log(last = 40) {
+    return this.lines.slice(-last).join("\n");
+  }
+
+  /** Spawns the process; resolves once /api/health answers 200, rejects (with the output) if it exits first. */
+  async start(timeoutMs = 90_000): Promise<void> {
+    if (this.child) throw new Error("server already running");
+    const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], { cwd: ROOT, env: this.env, stdio: ["ignore", "pipe", "pipe"] });
+    this.child = child;
+    this.starts++;
+    const keep = (chunk: Buffer) => {
+      for (const line of chunk.toString("utf8").split("\n")) if (line.trim()) this.lines.push(line);
+      if (this.lines.length > 200) this.lines.splice(0, this.lines.length - 200);
+    };
+    child.stdout!.on("data", keep);
+    child.stderr!.on("data", keep);
+    this.exited = new Promise((resolve) =>
+      child.once("exit", (code, signal) => {
+        if (this.child === child) this.child = null;
+        resolve({ code, signal });
+      }),
+    );
+    const deadline = Date.now() + timeoutMs;
+    let gone = false;
+    void this.exited.then(() => (gone = true));
+    while (Date.now() < deadline) {
+      if (gone) throw new Error(`the server exited before it answered /api/health:\n${this.log()}`);
+      try {
+        const res = await fetch(`${this.url}/api/health`, { signal: AbortSignal.timeout(2000) });
+        if (res.status === 200) return;
+      } catch {
+        // not listening yet
+      }
+      await sleep(100);
+    }
+    throw new Error(`the server did not answer /api/health within ${timeoutMs} ms:\n${this.log()}`);
+  }
+
+  /** Sends the signal and waits for the process to end. */
+  async kill(signal: NodeJS.Signals = "SIGKILL") {
+    const child = this.child;
+    if (!child) return { code: null, signal: null };
+    child.kill(signal);
+    return this.exited;
+  }
+
+  /** Resolves when the process ends by itself (a refused boot, for instance). */
+  waitForExit() {
+    return this.exited;
+  }
+
+  async restart(signal: NodeJS.Signals = "SIGKILL") {
+    await this.kill(signal);
+    await this.start();
+  }
+}
+
+export interface ServerWorld {
+  databaseUrl: string;
+  uploadsDir: string;
+  /**
+   * The app in this process on the same database and uploads folder: for preparing data with the helpers made for
+   * startTestApp (prepareReadyVehicle and friends), for reading rows and files, and for running the clean-up.
+   */
+  app: TestApp;
+  /** A server process on its own port (a free one unless given), sharing the database and uploads folder. */
+  server: (options?: { port?: number; env?: NodeJS.ProcessEnv }) => Promise<ServerProcess>;
+  close: () => Promise<void>;
+}
+
+/**
+ * One database (created on the run's MariaDB and seeded with the demo dealership and staff, password DEMO_PASSWORD)
+ * and one uploads folder, with as many real server processes on them as a test asks for.
+ */
+export async function serverWorld(): Promise<ServerWorld> {
+  const database = createTestDatabase();
+  const uploadsDir = mkdtempSync(path.join(tmpdir(), "forthright-fault-uploads-"));
+  const ctx = await createContext({
+    uploadsDir,
+    env: { NODE_ENV: "test", DATABASE_URL: database.url, PUBLIC_URL: ORIGIN, LOG_LEVEL: "silent" },
+    logger: pino({ level: "silent" }),
+    // The in-process app is for preparing data; keep its limits out of the way (the servers use the defaults).
+    limits: Object.fromEntries(
+      ["signInPerAddress", "signInPerAccount", "enquiryPerAddress", "enquiryPerVehicle", "resetPerAddress", "resetPerAccount"].map((k) => [k, { points: 1000, durationSeconds: 900 }]),
+    ) as never,
+  });
+  await seedDemo(ctx.database.db, { password: DEMO_PASSWORD });
+  const app = createApp(ctx);
+  const agent = () => request.agent(app).set("Origin", ORIGIN);
+  const servers: ServerProcess[] = [];
+  const t: TestApp = {
+    app,
+    ctx,
+    agent,
+    async signIn(role: Role) {
+      const a = agent();
+      const email = DEMO_USERS.find((u) => u.role === role)!.email;
+      const res = await a.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD });
+      if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
+      return a;
+    },
+    close: async () => undefined,
+  };
+  return {
+    databaseUrl: database.url,
+    uploadsDir,
+    app: t,
+    async server(options = {}) {
+      const port = options.port ?? (await freePort());
+      const env: NodeJS.ProcessEnv = {
+        ...process.env,
+        NODE_ENV: "test",
+        HOST: "127.0.0.1",
+        PORT: String(port),
+        PUBLIC_URL: `http://127.0.0.1:${port}`,
+        DATABASE_URL: database.url,
+        UPLOADS_DIR: uploadsDir,
+        LOG_LEVEL: "warn",
+        // Each process its own demo mail catcher, so instances never fight over a port.
+        FAKE_SMTP_PORT: String(await freePort()),
+        SMTP_HOST: "",
+        // sharp's memory is glibc's arenas; keep the children small on a shared machine (see DEVELOPERS.md).
+        MALLOC_ARENA_MAX: "2",
+        ...options.env,
+      };
+      for (const k of Object.keys(env)) if (env[k] === "") delete env[k];
+      const server = new ServerProcess(port, env);
+      servers.push(server);
+      return server;
+    },
+    async close() {
+      for (const s of servers) await s.kill("SIGKILL");
+      await ctx.photoWorker.stop();
+      await ctx.mail.stop();
+      await ctx.database.close();
+      rmSync(uploadsDir, { recursive: true, force: true });
+      database.drop();
+    },
+  };
+}
+
+/** A minimal HTTP client for a server process: fetch with our Origin and the session cookie carried by hand. */
+export class Client {
+  cookie = "";
+  constructor(public baseUrl: string) {}
+
+  /** The same session against another instance. */
+  on(baseUrl: string) {
+    const c = new Client(baseUrl);
+    c.cookie = this.cookie;
+    return c;
+  }
+
+  async send(method: string, url: string, body?: unknown, init: { signal?: AbortSignal } = {}) {
+    const headers: Record<string, string> = { Origin: this.baseUrl };
+    if (this.cookie) headers.Cookie = this.cookie;
+    let payload: BodyInit | undefined;
+    if (body instanceof FormData) payload = body;
+    else if (body !== undefined) {
+      headers["Content-Type"] = "application/json";
+      payload = JSON.stringify(body);
+    }
+    const res = await fetch(`${this.baseUrl}${url}`, { method, headers, body: payload, signal: init.signal, redirect: "manual" });
+    for (const c of res.headers.getSetCookie()) {
+      const pair = c.split(";")[0]!;
+      const [name, value] = [pair.slice(0, pair.indexOf("=")), pair.slice(pair.indexOf("=") + 1)];
+      if (name === SESSION_COOKIE) this.cookie = value ? pair : "";
+    }
+    const text = await res.text();
+    let json: any = null;
+    try {
+      json = text ? JSON.parse(text) : null;
+    } catch {
+      json = null;
+    }
+    return { status: res.status, body: json, text, headers: res.headers };
+  }
+
+  get = (url: string) => this.send("GET", url);
+  post = (url: string, body?: unknown, init?: { signal?: AbortSignal }) => this.send("POST", url, body, init);
+
+  async signIn(role: Role, password = DEMO_PASSWORD) {
+    const email = DEMO_USERS.find((u) => u.role === role)!.email;
+    const res = await this.post("/api/auth/sign-in", { email, password });
+    if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${res.text}`);
+    return this;
+  }
+}
+
+/** multipart/form-data with the files in the field "photos", as the upload screen sends them. */
+export function photoForm(files: Array<{ name: string; data: Buffer }>) {
+  const form = new FormData();
+  for (const f of files) form.append("photos", new Blob([new Uint8Array(f.data)], { type: "image/jpeg" }), f.name);
+  return form;
+}
