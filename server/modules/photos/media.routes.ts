@@ -11,7 +11,8 @@ const TYPES: Record<string, string> = { jpg: "image/jpeg", webp: "image/webp", a
 export function mediaRoutes(ctx: AppContext): Router {
   const router = Router();
   router.get("/media/{*key}", async (req, res, next) => {
-    const key = (req.params as { key: string[] }).key.join("/");
+    // "/media/" alone matches with no key at all (the wildcard is optional): a 404 like any other unknown key.
+    const key = ((req.params as { key?: string[] }).key ?? []).join("/");
     if (!KEY_PATTERN.test(key) || !(await ctx.storage.exists(key))) {
       res.status(404).type("text/plain").send("Not found");
       return;
