@@ -8,7 +8,8 @@ export type KeySource = (database: Database) => Promise<Iterable<string>>;
 const sources: KeySource[] = [];
 export const registerKeySource = (source: KeySource) => void sources.push(source);
 
-async function referencedKeys(database: Database): Promise<Set<string>> {
+/** Every stored key a row refers to (also used by `npm run restore` to check a restored site). */
+export async function referencedKeys(database: Database): Promise<Set<string>> {
   const keys = new Set<string>();
   for (const p of await database.db.select({ masterKey: photos.masterKey, variants: photos.variants }).from(photos)) {
     keys.add(p.masterKey);
@@ -28,14 +29,28 @@ async function referencedKeys(database: Database): Promise<Set<string>> {
 export async function removeOrphans(database: Database, storage: Storage, root: string, options: { graceMs?: number; now?: Date } = {}) {
   const grace = options.graceMs ?? 60 * 60 * 1000;
   const cutoff = (options.now ?? new Date()).getTime() - grace;
-  const keys = await referencedKeys(database);
-  const removed: string[] = [];
-  for await (const file of storage.list()) {
-    if (file.modifiedAt.getTime() > cutoff) continue;
-    if (file.partial || !keys.has(file.key)) {
-      await removeListed(root, file.key);
-      removed.push(file.key);
+  // The files lock (shared with `npm run backup`, see scripts/backup.ts): a backup copying files after its snapshot
+  // must not see a file removed that a row in that snapshot names. Held for the whole pass; when a backup holds it,
+  // this pass is skipped (the next hourly one catches up).
+  const conn = await database.pool.getConnection();
+  try {
+    const [[lock]] = (await conn.query("SELECT GET_LOCK(CONCAT(DATABASE(), ':files'), 0) AS got")) as unknown as [[{ got: number | null }]];
+    if (!lock?.got) return [];
+    try {
+      const keys = await referencedKeys(database);
+      const removed: string[] = [];
+      for await (const file of storage.list()) {
+        if (file.modifiedAt.getTime() > cutoff) continue;
+        if (file.partial || !keys.has(file.key)) {
+          await removeListed(root, file.key);
+          removed.push(file.key);
+        }
+      }
+      return removed;
+    } finally {
+      await conn.query("SELECT RELEASE_LOCK(CONCAT(DATABASE(), ':files'))");
     }
+  } finally {
+    conn.release();
   }
-  return removed;
 }

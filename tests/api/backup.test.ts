@@ -1,0 +1,257 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import request from "supertest";
+import { execFile } from "node:child_process";
+import { createHash } from "node:crypto";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync, mkdirSync, readdirSync, statSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { promisify } from "node:util";
+import { ORIGIN, startTestApp, type TestApp } from "../support/app.ts";
+import { createTestDatabase } from "../support/database.ts";
+import { landscapeJpeg } from "../support/images.ts";
+import { publishReadyVehicle } from "../support/publishing.ts";
+import { dieselSuv } from "../support/vehicles.ts";
+import { connect } from "../../server/db/client.ts";
+import { referencedKeys, removeOrphans } from "../../server/modules/photos/cleanup.ts";
+import { backup } from "../../scripts/backup.ts";
+import { restore } from "../../scripts/restore.ts";
+
+const exec = promisify(execFile);
+const root = path.resolve(import.meta.dirname, "../..");
+
+let t: TestApp;
+let work: string;
+let slug: string;
+const targets: Array<ReturnType<typeof createTestDatabase>> = [];
+
+/** An empty database and a not-yet-existing uploads folder to restore into. */
+function freshTarget() {
+  const db = createTestDatabase();
+  targets.push(db);
+  return { db, uploadsDir: path.join(work, `uploads-${db.name}`) };
+}
+
+function filesOf(dir: string): Map<string, string> {
+  const out = new Map<string, string>();
+  const walk = (rel: string) => {
+    for (const name of readdirSync(path.join(dir, rel))) {
+      const r = rel ? `${rel}/${name}` : name;
+      if (statSync(path.join(dir, r)).isDirectory()) walk(r);
+      else if (!name.endsWith(".partial")) out.set(r, createHash("sha256").update(readFileSync(path.join(dir, r))).digest("hex"));
+    }
+  };
+  walk("");
+  return out;
+}
+
+async function rows<T>(sql: string, params: unknown[] = []): Promise<T[]> {
+  return (await t.ctx.database.pool.query(sql, params))[0] as T[];
+}
+
+/** CHECKSUM TABLE of every base table in a database (the test user may read every test database). */
+async function checksums(database: string): Promise<Record<string, string>> {
+  const tables = await rows<{ name: string }>("SELECT TABLE_NAME AS name FROM information_schema.TABLES WHERE TABLE_SCHEMA = ? AND TABLE_TYPE = 'BASE TABLE' ORDER BY TABLE_NAME", [database]);
+  const out: Record<string, string> = {};
+  for (const { name } of tables) {
+    const [r] = await rows<{ Checksum: string | number | null }>(`CHECKSUM TABLE \`${database}\`.\`${name}\``);
+    out[name] = String(r!.Checksum);
+  }
+  return out;
+}
+
+const npm = (args: string[], env: Record<string, string>) =>
+  exec("npm", ["run", "--silent", ...args], { cwd: root, env: { ...process.env, NODE_ENV: "test", LOG_LEVEL: "silent", ...env }, maxBuffer: 16 * 1024 * 1024 });
+
+const enquiry = () => ({
+  name: "Jo Marlowe", email: "jo.marlowe@example.test", phone: "", message: "Could I see it on Saturday morning?", preferredContact: "email",
+  consent: true, website: "", startedAt: Date.now() - 20_000, revision: 1,
+});
+
+beforeAll(async () => {
+  work = mkdtempSync(path.join(tmpdir(), "forthright-backup-test-"));
+  t = await startTestApp();
+  ({ slug } = await publishReadyVehicle(t));
+  const res = await request(t.app).post(`/api/public/vehicles/${slug}/enquiries`).set("Origin", ORIGIN).send(enquiry());
+  expect(res.status).toBe(201);
+}, 300_000);
+
+afterAll(async () => {
+  await t?.close();
+  for (const db of targets) db.drop();
+  rmSync(work, { recursive: true, force: true });
+});
+
+describe("backup and restore", () => {
+  let consistentArchive = "";
+  let firstTarget: ReturnType<typeof freshTarget>;
+
+  it("when the app keeps writing during a backup, then the restore is one snapshot: every write acknowledged before it began is there, and every file a row names is there with its hash", async () => {
+    const sales = await t.signIn("sales");
+    const workshop = await t.signIn("workshop");
+    // A photo with all its sizes, deleted while the backup copies files: the snapshot still has its row.
+    const doomed = (await sales.post("/api/vehicles").send(dieselSuv({ colour: "Moss green" }))).body.vehicle;
+    const doomedPhoto = (await workshop.post(`/api/vehicles/${doomed.id}/photos`).attach("photos", await landscapeJpeg(1200, 800), "doomed.jpg")).body.photos[0];
+    await t.ctx.photoWorker.settled();
+    // The worker bumps a photo's version when it stores the sizes, so a deletion asks for the current one.
+    const deletePhoto = async (vehicleId: number, photoId: number) => {
+      const [p] = await rows<{ version: number }>("SELECT version FROM photos WHERE id = ?", [photoId]);
+      return workshop.delete(`/api/vehicles/${vehicleId}/photos/${photoId}?version=${p!.version}`);
+    };
+
+    // The writer: create a vehicle, upload a photo, edit, delete the previous photo and clean up orphans, again and again.
+    const acked: Array<{ vehicleId: number; version: number }> = [];
+    const failures: string[] = [];
+    let stop = false;
+    let iterations = 0;
+    const writer = (async () => {
+      let previous: { vehicleId: number; photoId: number } | null = null;
+      while (!stop) {
+        const created = await sales.post("/api/vehicles").send(dieselSuv({ colour: `Batch ${iterations}` }));
+        if (created.status !== 201) failures.push(`create ${created.status}`);
+        const v = created.body.vehicle;
+        acked.push({ vehicleId: v.id, version: v.version });
+        const up = await workshop.post(`/api/vehicles/${v.id}/photos`).attach("photos", await landscapeJpeg(800, 600), "w.jpg");
+        if (up.status !== 201) failures.push(`upload ${up.status}`);
+        const edited = await sales.patch(`/api/vehicles/${v.id}`).send({ version: v.version, colour: `Edited ${iterations}` });
+        if (edited.status !== 200) failures.push(`edit ${edited.status} ${JSON.stringify(edited.body)}`);
+        else acked.push({ vehicleId: v.id, version: edited.body.vehicle.version });
+        if (previous) {
+          const del = await deletePhoto(previous.vehicleId, previous.photoId);
+          if (del.status !== 204 && del.status !== 200) failures.push(`delete ${del.status} ${JSON.stringify(del.body)}`);
+          // The clean-up with no grace period, once the worker has written every size (so it never races a write of ours).
+          await t.ctx.photoWorker.settled();
+          await removeOrphans(t.ctx.database, t.ctx.storage, t.ctx.uploadsDir, { graceMs: 0 });
+        }
+        previous = { vehicleId: v.id, photoId: up.body.photos[0].id };
+        iterations++;
+      }
+    })().catch((err: Error) => void failures.push(`writer stopped: ${err.message}`));
+    while (iterations < 2) await new Promise((r) => setTimeout(r, 50));
+
+    const before = [...acked];
+    const iterationsBefore = iterations;
+    let cleanupDuringCopy: string[] | null = null;
+    let deletedDuringCopy = 0;
+    const result = await backup({
+      databaseUrl: t.ctx.config.DATABASE_URL,
+      uploadsDir: t.ctx.uploadsDir,
+      out: path.join(work, "during-writes.tar.gz"),
+      afterDump: async () => {
+        deletedDuringCopy = (await deletePhoto(doomed.id, doomedPhoto.id)).status;
+        cleanupDuringCopy = await removeOrphans(t.ctx.database, t.ctx.storage, t.ctx.uploadsDir, { graceMs: 0 });
+      },
+    }).finally(async () => {
+      stop = true;
+      await writer;
+    });
+    const iterationsDuring = iterations - iterationsBefore;
+    expect(deletedDuringCopy).toBe(204);
+    expect(failures).toEqual([]);
+    // The clean-up found the files lock held and skipped its pass.
+    expect(cleanupDuringCopy).toEqual([]);
+    console.log(`backup during writes: ${result.manifest.files.length} files, ${result.bytes} bytes; dump ${result.timings.dumpMs} ms, files ${result.timings.copyMs} ms, archive ${result.timings.archiveMs} ms, total ${result.timings.totalMs} ms; writer iterations during it: ${iterationsDuring}`);
+
+    firstTarget = freshTarget();
+    const restored = await restore({ archive: result.path, databaseUrl: firstTarget.db.url, uploadsDir: firstTarget.uploadsDir });
+    console.log(`restore of it: ${restored.rows} rows, ${restored.files} files; verify ${restored.timings.verifyMs} ms, load ${restored.timings.loadMs} ms, files ${restored.timings.filesMs} ms, checks ${restored.timings.checkMs} ms, total ${restored.timings.totalMs} ms`);
+
+    const target = firstTarget.db.name;
+    const vehicles = new Map((await rows<{ id: number; version: number }>(`SELECT id, version FROM \`${target}\`.vehicles`)).map((v) => [v.id, v.version]));
+    for (const a of before) expect(vehicles.get(a.vehicleId), `vehicle ${a.vehicleId} at version ${a.version}`).toBeGreaterThanOrEqual(a.version);
+    // The doomed photo was deleted after the snapshot: its row is in the backup, and so are all its files.
+    const [photo] = await rows<{ masterKey: string; variants: unknown }>(`SELECT master_key AS masterKey, variants FROM \`${target}\`.photos WHERE id = ?`, [doomedPhoto.id]);
+    expect(photo).toBeDefined();
+    const variants = (typeof photo!.variants === "string" ? JSON.parse(photo!.variants) : photo!.variants) as Array<{ key: string }>;
+    expect(variants.length).toBeGreaterThan(0);
+    // Rows the writer did not touch are there as they were.
+    for (const table of ["revisions", "revision_media", "leads", "users", "defects"]) {
+      const [src] = await rows<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${table}\``);
+      const [dst] = await rows<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${target}\`.\`${table}\``);
+      expect(Number(dst!.n), table).toBe(Number(src!.n));
+    }
+
+    // Every file a restored row names is restored, with the content the backup recorded; masters and close-ups are
+    // named by the sha256 of their own bytes, so for them the content is checked against the name as well.
+    const files = filesOf(firstTarget.uploadsDir);
+    const recorded = new Map(result.manifest.files.map((f) => [f.key, f.sha256]));
+    const database = connect(firstTarget.db.url, { connectionLimit: 2 });
+    try {
+      const keys = await referencedKeys(database);
+      expect(keys.has(photo!.masterKey)).toBe(true);
+      for (const v of variants) expect(keys.has(v.key)).toBe(true);
+      for (const key of keys) {
+        expect(files.get(key), key).toBe(recorded.get(key));
+        const named = /\/([a-f0-9]{64})\.(jpg|webp)$/.exec(key);
+        if (named) expect(files.get(key), key).toBe(named[1]);
+      }
+    } finally {
+      await database.close();
+    }
+  }, 300_000);
+
+  it("when writes have stopped, then a backup and restore through npm run give the same CHECKSUM TABLE for every table and the same bytes for every file", async () => {
+    await t.ctx.photoWorker.settled();
+    const archive = path.join(work, "quiet.tar.gz");
+    let started = Date.now();
+    const made = await npm(["backup", "--", "--out", archive], { DATABASE_URL: t.ctx.config.DATABASE_URL, UPLOADS_DIR: t.ctx.uploadsDir });
+    const backupMs = Date.now() - started;
+    expect(made.stdout).toMatch(/Backup written: .*quiet\.tar\.gz/);
+    consistentArchive = archive;
+
+    const target = freshTarget();
+    started = Date.now();
+    const done = await npm(["restore", "--", archive], { DATABASE_URL: target.db.url, UPLOADS_DIR: target.uploadsDir });
+    const restoreMs = Date.now() - started;
+    expect(done.stdout).toMatch(/Restored \d+ tables/);
+    console.log(`npm run backup (quiet): ${backupMs} ms\n${made.stdout.trim()}\nnpm run restore: ${restoreMs} ms\n${done.stdout.trim()}`);
+
+    const source = await checksums(t.ctx.config.DATABASE_URL.split("/").pop()!);
+    const copy = await checksums(target.db.name);
+    expect(Object.keys(source).length).toBeGreaterThan(10);
+    expect(copy).toEqual(source);
+    const sourceFiles = filesOf(t.ctx.uploadsDir);
+    expect(sourceFiles.size).toBeGreaterThan(0);
+    expect(filesOf(target.uploadsDir)).toEqual(sourceFiles);
+  }, 300_000);
+
+  it("when the target database has rows or the uploads folder has files, then restore refuses and says which, and --force replaces them", async () => {
+    await expect(restore({ archive: consistentArchive, databaseUrl: t.ctx.config.DATABASE_URL, uploadsDir: t.ctx.uploadsDir })).rejects.toThrow(
+      /Refusing to restore over existing data: database t_\w+ has rows in \d+ table\(s\) \(audit_log, .*\) and the uploads folder .* holds \d+ file\(s\)/,
+    );
+    const target = freshTarget();
+    mkdirSync(path.join(target.uploadsDir, "photos"), { recursive: true });
+    writeFileSync(path.join(target.uploadsDir, "photos", "left-behind.jpg"), "x");
+    await expect(restore({ archive: consistentArchive, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/the uploads folder .* holds 1 file/);
+    // The first restore's target is full now; --force replaces it.
+    const forced = await restore({ archive: consistentArchive, databaseUrl: firstTarget.db.url, uploadsDir: firstTarget.uploadsDir, force: true });
+    expect(filesOf(firstTarget.uploadsDir).size).toBe(forced.files);
+    expect(await checksums(firstTarget.db.name)).toEqual(await checksums(t.ctx.config.DATABASE_URL.split("/").pop()!));
+  }, 300_000);
+
+  it("when the archive is truncated or corrupt, then restore refuses with a clear message and leaves the target untouched", async () => {
+    const whole = readFileSync(consistentArchive);
+    const truncated = path.join(work, "truncated.tar.gz");
+    writeFileSync(truncated, whole.subarray(0, Math.floor(whole.length / 2)));
+    const flipped = path.join(work, "flipped.tar.gz");
+    const damaged = Buffer.from(whole);
+    damaged[Math.floor(damaged.length * 0.6)]! ^= 0xff;
+    writeFileSync(flipped, damaged);
+    const notOurs = path.join(work, "not-a-backup.tar.gz");
+    writeFileSync(notOurs, "this is not an archive at all\n");
+
+    const target = freshTarget();
+    await expect(restore({ archive: truncated, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/corrupt or truncated|damaged|truncated/);
+    await expect(restore({ archive: flipped, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/corrupt or truncated|damaged/);
+    await expect(restore({ archive: notOurs, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/corrupt or truncated|not a Forthright backup/);
+    // Through the command line: exit code 1 and the reason on stderr.
+    const cli = await npm(["restore", "--", truncated], { DATABASE_URL: target.db.url, UPLOADS_DIR: target.uploadsDir }).then(
+      () => null,
+      (err: { code: number; stderr: string }) => err,
+    );
+    expect(cli?.code).toBe(1);
+    expect(cli?.stderr).toMatch(/Restore stopped: The archive .*truncated\.tar\.gz is corrupt or truncated/);
+    const [tables] = await rows<{ n: number }>("SELECT COUNT(*) AS n FROM information_schema.TABLES WHERE TABLE_SCHEMA = ?", [target.db.name]);
+    expect(Number(tables!.n)).toBe(0);
+    expect(() => readdirSync(target.uploadsDir)).toThrow();
+  }, 300_000);
+});
