@@ -3,9 +3,9 @@ import { execFileSync } from "node:child_process";
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { asc, isNotNull } from "drizzle-orm";
+import { asc } from "drizzle-orm";
 import { defects, photos, revisionMedia, revisions, vehicles } from "../../server/db/schema/index.ts";
-import { removeOrphans } from "../../server/modules/photos/cleanup.ts";
+import { referencedKeys, removeOrphans } from "../../server/modules/photos/cleanup.ts";
 import { mediaKeysOf } from "../../server/modules/publishing/snapshot.ts";
 import { assertDurable } from "../../server/lib/boot.ts";
 import { databaseUrl, findBinary, instanceFor, provisionDatabase, removeDataDir, startMariadb, stopMariadb } from "../../server/db/mariadb.ts";
@@ -127,17 +127,6 @@ async function listFiles() {
   return out;
 }
 
-async function referencedKeys() {
-  const keys = new Set<string>();
-  for (const p of await db().select().from(photos)) {
-    keys.add(p.masterKey);
-    for (const v of p.variants) keys.add(v.key);
-  }
-  for (const d of await db().select({ key: defects.closeupKey }).from(defects).where(isNotNull(defects.closeupKey))) keys.add(d.key!);
-  for (const r of await db().select({ key: revisionMedia.key }).from(revisionMedia)) keys.add(r.key);
-  return keys;
-}
-
 let seen = new Set<string>();
 async function expectFile(key: string, what: string) {
   if (seen.has(key)) return;
@@ -243,7 +232,7 @@ describe("crash consistency under SIGKILL", () => {
 
       // The clean-up with no grace period removes every orphan and unfinished write, and nothing a row refers to.
       const before = await listFiles();
-      const referenced = await referencedKeys();
+      const referenced = await referencedKeys(world.app.ctx.database);
       const orphansBefore = before.filter((f) => f.partial || !referenced.has(f.key));
       const removed = await removeOrphans(world.app.ctx.database, storage(), world.uploadsDir, { graceMs: 0 });
       expect(removed.sort()).toEqual(orphansBefore.map((f) => f.key).sort());
