@@ -23,7 +23,7 @@
  */
 import { spawn } from "node:child_process";
 import { createReadStream, createWriteStream } from "node:fs";
-import { copyFile, link, mkdir, mkdtemp, open, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
+import { chmod, copyFile, link, mkdir, mkdtemp, open, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
 import { createInterface } from "node:readline";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
@@ -180,7 +180,9 @@ export async function backup(options: BackupOptions): Promise<BackupResult> {
     await writeFile(path.join(staging, MANIFEST_NAME), JSON.stringify(manifest, null, 2) + "\n", { mode: 0o600 });
     // Written under a temporary name, flushed, then renamed: a crash never leaves a half archive under the real name.
     const partial = `${out}.partial`;
-    await tar.create({ gzip: true, file: partial, cwd: staging, portable: true, mode: 0o600 } as tar.TarOptionsWithAliasesAsyncFile, [MANIFEST_NAME, DUMP_NAME, "uploads"]);
+    await tar.create({ gzip: true, file: partial, cwd: staging, portable: true }, [MANIFEST_NAME, DUMP_NAME, "uploads"]);
+    // The dump holds password hashes and session ids: readable by the owner only.
+    await chmod(partial, 0o600);
     const handle = await open(partial, "r+");
     await handle.sync();
     await handle.close();

@@ -15,6 +15,7 @@ import { connect } from "../../server/db/client.ts";
 import { referencedKeys, removeOrphans } from "../../server/modules/photos/cleanup.ts";
 import { backup } from "../../scripts/backup.ts";
 import { restore } from "../../scripts/restore.ts";
+import * as tar from "tar";
 
 const exec = promisify(execFile);
 const root = path.resolve(import.meta.dirname, "../..");
@@ -126,9 +127,21 @@ describe("backup and restore", () => {
         iterations++;
       }
     })().catch((err: Error) => void failures.push(`writer stopped: ${err.message}`));
+    // The editor: one vehicle edited as fast as the API answers, so writes land before, during and after the dump.
+    const edited = (await sales.post("/api/vehicles").send(dieselSuv({ colour: "Ochre" }))).body.vehicle;
+    let editedVersion = edited.version as number;
+    const editor = (async () => {
+      for (let n = 0; !stop; n++) {
+        const r = await sales.patch(`/api/vehicles/${edited.id}`).send({ version: editedVersion, keysCount: (n % 3) + 1 });
+        if (r.status !== 200) failures.push(`editor ${r.status}`);
+        else editedVersion = r.body.vehicle.version;
+      }
+    })().catch((err: Error) => void failures.push(`editor stopped: ${err.message}`));
     while (iterations < 2) await new Promise((r) => setTimeout(r, 50));
 
     const before = [...acked];
+    const editedBefore = editedVersion;
+    let editedAtHook = 0;
     const iterationsBefore = iterations;
     let cleanupDuringCopy: string[] | null = null;
     let deletedDuringCopy = 0;
@@ -137,12 +150,15 @@ describe("backup and restore", () => {
       uploadsDir: t.ctx.uploadsDir,
       out: path.join(work, "during-writes.tar.gz"),
       afterDump: async () => {
+        // The dump is done: whatever is acknowledged from here on is after the snapshot and must not be in it.
+        editedAtHook = editedVersion;
+        while (editedVersion === editedAtHook && failures.length === 0) await new Promise((r) => setTimeout(r, 10));
         deletedDuringCopy = (await deletePhoto(doomed.id, doomedPhoto.id)).status;
         cleanupDuringCopy = await removeOrphans(t.ctx.database, t.ctx.storage, t.ctx.uploadsDir, { graceMs: 0 });
       },
     }).finally(async () => {
       stop = true;
-      await writer;
+      await Promise.all([writer, editor]);
     });
     const iterationsDuring = iterations - iterationsBefore;
     expect(deletedDuringCopy).toBe(204);
@@ -158,6 +174,11 @@ describe("backup and restore", () => {
     const target = firstTarget.db.name;
     const vehicles = new Map((await rows<{ id: number; version: number }>(`SELECT id, version FROM \`${target}\`.vehicles`)).map((v) => [v.id, v.version]));
     for (const a of before) expect(vehicles.get(a.vehicleId), `vehicle ${a.vehicleId} at version ${a.version}`).toBeGreaterThanOrEqual(a.version);
+    // The edited vehicle is as the snapshot saw it: at least what was acknowledged before, nothing from after the dump.
+    expect(vehicles.get(edited.id)).toBeGreaterThanOrEqual(editedBefore);
+    expect(vehicles.get(edited.id)).toBeLessThanOrEqual(editedAtHook);
+    expect(editedVersion).toBeGreaterThan(editedAtHook);
+    console.log(`edited vehicle: version ${editedBefore} before the backup, ${vehicles.get(edited.id)} in it, ${editedAtHook} when the dump ended, ${editedVersion} at the end`);
     // The doomed photo was deleted after the snapshot: its row is in the backup, and so are all its files.
     const [photo] = await rows<{ masterKey: string; variants: unknown }>(`SELECT master_key AS masterKey, variants FROM \`${target}\`.photos WHERE id = ?`, [doomedPhoto.id]);
     expect(photo).toBeDefined();
@@ -239,7 +260,23 @@ describe("backup and restore", () => {
     const notOurs = path.join(work, "not-a-backup.tar.gz");
     writeFileSync(notOurs, "this is not an archive at all\n");
 
+    // A file changed inside an otherwise well-formed archive: the manifest's sha256 catches it.
+    const unpacked = path.join(work, "unpacked");
+    mkdirSync(unpacked);
+    await tar.extract({ file: consistentArchive, cwd: unpacked });
+    const victim = (JSON.parse(readFileSync(path.join(unpacked, "manifest.json"), "utf8")) as { files: Array<{ key: string }> }).files[0]!.key;
+    writeFileSync(path.join(unpacked, "uploads", victim), "not the photo");
+    const tampered = path.join(work, "tampered.tar.gz");
+    await tar.create({ gzip: true, file: tampered, cwd: unpacked }, ["manifest.json", "database.sql", "uploads"]);
+
     const target = freshTarget();
+    const refusal = (archive: string) => restore({ archive, databaseUrl: target.db.url, uploadsDir: target.uploadsDir }).then(() => "restored", (err: Error) => err.message);
+    const messages = { truncated: await refusal(truncated), flipped: await refusal(flipped), notOurs: await refusal(notOurs), tampered: await refusal(tampered) };
+    console.log(messages);
+    expect(messages.truncated).toMatch(/^The archive .*truncated\.tar\.gz is corrupt or truncated and was not restored/);
+    expect(messages.flipped).toMatch(/corrupt or truncated|is damaged/);
+    expect(messages.notOurs).toMatch(/corrupt or truncated|not a Forthright backup/);
+    expect(messages.tampered).toBe(`The archive is damaged (1 file): ${victim} does not match its sha256.`);
     await expect(restore({ archive: truncated, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/corrupt or truncated|damaged|truncated/);
     await expect(restore({ archive: flipped, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/corrupt or truncated|damaged/);
     await expect(restore({ archive: notOurs, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/corrupt or truncated|not a Forthright backup/);
