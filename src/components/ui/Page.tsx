@@ -1,4 +1,4 @@
-import type { ReactNode } from "react";
+import { useId, type ReactNode } from "react";
 
 export function PageHeader({ title, lead, actions }: { title: ReactNode; lead?: ReactNode; actions?: ReactNode }) {
   return (
@@ -12,10 +12,12 @@ export function PageHeader({ title, lead, actions }: { title: ReactNode; lead?: 
   );
 }
 
+/** A titled block of a staff page; its heading names it, so assistive technology lists it as a region. */
 export function Panel({ title, children, className = "" }: { title?: ReactNode; children: ReactNode; className?: string }) {
+  const id = useId();
   return (
-    <section className={`rounded-lg border border-line bg-paper-raised p-5 ${className}`}>
-      {title ? <h2 className="mb-3 text-lg font-bold">{title}</h2> : null}
+    <section className={`rounded-lg border border-line bg-paper-raised p-5 ${className}`} aria-labelledby={title ? id : undefined}>
+      {title ? <h2 id={id} className="mb-3 text-lg font-bold">{title}</h2> : null}
       {children}
     </section>
   );

@@ -69,8 +69,9 @@ export function UploadQueue({ vehicleId, onUploaded, disabled }: { vehicleId: nu
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap gap-2">
-        <input ref={cameraInput} type="file" accept="image/*" capture="environment" className="sr-only" tabIndex={-1} onChange={(e) => (add(e.target.files), (e.target.value = ""))} aria-label="Take a photo" />
-        <input ref={fileInput} type="file" accept="image/*" multiple className="sr-only" tabIndex={-1} onChange={(e) => (add(e.target.files), (e.target.value = ""))} aria-label="Choose photos" data-testid="photo-input" />
+        {/* The inputs are worked by the two buttons below; hidden from assistive technology so each control is announced once. */}
+        <input ref={cameraInput} type="file" accept="image/*" capture="environment" className="sr-only" tabIndex={-1} aria-hidden onChange={(e) => (add(e.target.files), (e.target.value = ""))} aria-label="Take a photo" />
+        <input ref={fileInput} type="file" accept="image/*" multiple className="sr-only" tabIndex={-1} aria-hidden onChange={(e) => (add(e.target.files), (e.target.value = ""))} aria-label="Choose photos" data-testid="photo-input" />
         <button type="button" disabled={disabled} className="min-h-12 flex-1 rounded-md border border-signal-strong bg-signal px-4 font-bold text-paper-raised sm:flex-none" onClick={() => cameraInput.current?.click()}>
           Take a photo
         </button>

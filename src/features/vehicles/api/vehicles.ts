@@ -73,8 +73,10 @@ function useVehicleWrite<I>(fn: (input: I) => Promise<{ vehicle: VehicleRecord }
   return useMutation({
     mutationFn: fn,
     onSuccess: ({ vehicle }) => {
-      // Keep the evidence already loaded; the record part is the server's new answer.
+      // Keep the evidence already loaded; the record part is the server's new answer. Readiness and publishing are
+      // not in that answer and a price or copy changes them, so the detail is re-read behind it.
       qc.setQueryData<{ vehicle: VehicleView }>(vehicleKeys.detail(vehicle.id), (old) => (old ? { vehicle: { ...old.vehicle, ...vehicle } } : old));
+      qc.invalidateQueries({ queryKey: vehicleKeys.detail(vehicle.id) });
       qc.invalidateQueries({ queryKey: vehicleKeys.lists() });
       qc.invalidateQueries({ queryKey: vehicleKeys.history(vehicle.id) });
     },
