@@ -2,7 +2,8 @@ import { Router } from "express";
 import type { AppContext } from "../../lib/context.ts";
 import { AppError } from "../../lib/errors.ts";
 import { renderIndex } from "../client/client.routes.ts";
-import { getPublic, sitemapEntries } from "./public.service.ts";
+import { publicRepresentation, sitemapEntries } from "./public.service.ts";
+import { representation, sendRepresentation } from "./public-cache.ts";
 import { vehicleHeadTags } from "./seo.ts";
 
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
@@ -17,22 +18,23 @@ export function pagesRoutes(ctx: AppContext): Router {
   router.get(["/vehicles/:slug", "/vehicles/:slug/card", "/vehicles/:slug/revisions/:n"], async (req, res, next) => {
     const slug = String(req.params.slug);
     if (!/^[a-z0-9-]{1,120}$/.test(slug)) return next();
-    let status = 200;
-    let head = "";
+    if (!renderIndex()) return next();
+    const card = req.path.endsWith("/card");
     try {
-      const v = await getPublic(ctx, slug);
-      head = vehicleHeadTags(v.snapshot, v.status, v.url, ctx.config.publicUrl);
-      // The page's own data, so the condition page renders without a second round trip (a data block, never run).
-      head += `\n    <script type="application/json" id="fr-page-data">${JSON.stringify({ slug, vehicle: v }).replace(/</g, "\\u003c")}</script>`;
-      if (req.path.endsWith("/card")) head += `\n    <meta name="robots" content="noindex" />`;
+      // Made once per revision (public-cache.ts); the slug's status and current revision are read every time.
+      const page = await publicRepresentation(ctx, card ? "page-card" : "page", slug, undefined, (v) => {
+        let head = vehicleHeadTags(v.snapshot, v.status, v.url, ctx.config.publicUrl);
+        // The page's own data, so the condition page renders without a second round trip (a data block, never run).
+        head += `\n    <script type="application/json" id="fr-page-data">${JSON.stringify({ slug, vehicle: v }).replace(/</g, "\\u003c")}</script>`;
+        if (card) head += `\n    <meta name="robots" content="noindex" />`;
+        return representation("text/html; charset=utf-8", renderIndex(head)!);
+      });
+      sendRepresentation(req, res, page, "no-cache");
     } catch (err) {
       if (!(err instanceof AppError) || (err.status !== 404 && err.status !== 410)) throw err;
-      status = err.status;
-      head = `<title>${status === 410 ? "No longer advertised" : "Not found"}</title>\n    <meta name="robots" content="noindex" />`;
+      const head = `<title>${err.status === 410 ? "No longer advertised" : "Not found"}</title>\n    <meta name="robots" content="noindex" />`;
+      res.status(err.status).setHeader("Cache-Control", "no-cache").type("html").send(renderIndex(head));
     }
-    const html = renderIndex(head);
-    if (!html) return next();
-    res.status(status).setHeader("Cache-Control", "no-cache").type("html").send(html);
   });
 
   router.get("/sitemap.xml", async (_req, res) => {

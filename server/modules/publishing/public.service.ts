@@ -6,6 +6,7 @@ import { presentPublicDealership, primaryDealership } from "../dealerships/deale
 import type { PublicListQuery, PublicSort } from "../../../shared/schemas/public-query.ts";
 import type { PublicStatus, PublicVehicle, PublicVehicleCard, RevisionSummary } from "../../../shared/schemas/public.ts";
 import type { Revision } from "../../db/schema/index.ts";
+import { PublicCache, representation, type Representation } from "./public-cache.ts";
 
 /** Statuses whose newest revision the public may read. Withdrawn answers 410; anything else has never been public. */
 const PUBLIC: PublicStatus[] = ["live", "reserved", "sold"];
@@ -98,8 +99,18 @@ export async function listPublic(ctx: AppContext, q: PublicListQuery) {
 
 const summary = (r: Pick<Revision, "number" | "publishedAt" | "changes">): RevisionSummary => ({ number: r.number, publishedAt: r.publishedAt.toISOString(), changes: r.changes });
 
-/** A vehicle by its public address: the newest revision, or a given older one. Never the working record. */
-export async function getPublic(ctx: AppContext, slug: string, number?: number): Promise<PublicVehicle> {
+interface Located {
+  id: number;
+  status: PublicStatus;
+  currentRevisionId: number;
+}
+
+/**
+ * The one query every public read makes: slug → vehicle, status and current revision, by the unique slug index.
+ * 404 for never published, 410 for withdrawn or archived. Because it runs on every request and reads the shared
+ * database, a withdrawal, a sale or a new revision is seen at once by every instance.
+ */
+async function locate(ctx: AppContext, slug: string): Promise<Located> {
   const { db } = ctx.database;
   const [v] = await db.select({ id: vehicles.id, status: vehicles.status, currentRevisionId: vehicles.currentRevisionId }).from(vehicles).where(eq(vehicles.publicSlug, slug)).limit(1);
   if (!v || !v.currentRevisionId) throw notFound("That vehicle");
@@ -108,6 +119,12 @@ export async function getPublic(ctx: AppContext, slug: string, number?: number):
     throw new AppError(410, "withdrawn", "This vehicle is no longer advertised.", undefined, d ? { dealership: presentPublicDealership(d) } : {});
   }
   if (!PUBLIC.includes(v.status as PublicStatus)) throw notFound("That vehicle");
+  return { id: v.id, status: v.status as PublicStatus, currentRevisionId: v.currentRevisionId };
+}
+
+/** Everything the public sees of a located vehicle: its current (or numbered) revision and the list of revisions. */
+async function readPublic(ctx: AppContext, slug: string, v: Located, number?: number): Promise<PublicVehicle> {
+  const { db } = ctx.database;
   const all = await db
     .select({ id: revisions.id, number: revisions.number, publishedAt: revisions.publishedAt, changes: revisions.changes })
     .from(revisions)
@@ -116,7 +133,38 @@ export async function getPublic(ctx: AppContext, slug: string, number?: number):
   const wanted = number === undefined ? all.find((r) => r.id === v.currentRevisionId) : all.find((r) => r.number === number);
   if (!wanted) throw notFound("That revision");
   const [full] = await db.select().from(revisions).where(eq(revisions.id, wanted.id));
-  return { slug, url: urlFor(ctx, slug), status: v.status as PublicStatus, revision: summary(full!), snapshot: full!.snapshot, revisions: all.map(summary) };
+  return { slug, url: urlFor(ctx, slug), status: v.status, revision: summary(full!), snapshot: full!.snapshot, revisions: all.map(summary) };
+}
+
+/** A vehicle by its public address: the newest revision, or a given older one. Never the working record. */
+export async function getPublic(ctx: AppContext, slug: string, number?: number): Promise<PublicVehicle> {
+  return readPublic(ctx, slug, await locate(ctx, slug), number);
+}
+
+const caches = new WeakMap<AppContext, PublicCache>();
+/** The app's cache of public responses (one per context, so test apps on different databases never share one). */
+export function publicCacheOf(ctx: AppContext): PublicCache {
+  let cache = caches.get(ctx);
+  if (!cache) caches.set(ctx, (cache = new PublicCache()));
+  return cache;
+}
+
+/**
+ * A public response made from the vehicle's revisions, cached by what it depends on: revisions never change, so
+ * (vehicle, revision asked for, current revision, status) fixes the bytes; the slug → those lookup runs every time.
+ */
+export async function publicRepresentation(ctx: AppContext, kind: string, slug: string, number: number | undefined, render: (v: PublicVehicle) => Representation): Promise<Representation> {
+  const v = await locate(ctx, slug);
+  const key = `${kind}|${slug}|${v.id}|${number ?? "current"}|${v.currentRevisionId}|${v.status}`;
+  return publicCacheOf(ctx).get(key, async () => {
+    const rep = render(await readPublic(ctx, slug, v, number));
+    return { value: rep, size: rep.size + key.length };
+  });
+}
+
+/** GET /api/public/vehicles/:slug[/revisions/:n], serialised once per revision. */
+export function publicVehicleJson(ctx: AppContext, slug: string, number?: number): Promise<Representation> {
+  return publicRepresentation(ctx, "api", slug, number, (vehicle) => representation("application/json; charset=utf-8", JSON.stringify({ vehicle })));
 }
 
 /** Every page a search engine should know: the storefront and each vehicle on sale. */

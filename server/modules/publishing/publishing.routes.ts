@@ -7,7 +7,8 @@ import { validate } from "../../middleware/validate.ts";
 import { publishSchema, type PublishBody } from "../../../shared/schemas/publishing.ts";
 import { publicListQuerySchema, type PublicListQuery } from "../../../shared/schemas/public-query.ts";
 import { publish } from "./publishing.service.ts";
-import { getPublic, listPublic, urlFor } from "./public.service.ts";
+import { getPublic, listPublic, publicVehicleJson, urlFor } from "./public.service.ts";
+import { sendRepresentation } from "./public-cache.ts";
 
 const vehicleParams = z.object({ id: z.coerce.number().int().positive() });
 const slugParams = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,120}$/) });
@@ -29,15 +30,14 @@ export function publicVehiclesRoutes(ctx: AppContext): Router {
     res.setHeader("Cache-Control", "public, max-age=30");
     res.json(await listPublic(ctx, res.locals.query as PublicListQuery));
   });
-  router.get("/:slug", validate("params", slugParams), async (_req, res) => {
-    res.setHeader("Cache-Control", "public, max-age=30");
-    res.json({ vehicle: await getPublic(ctx, (res.locals.params as { slug: string }).slug) });
+  // Serialised once per revision (public-cache.ts); the slug's status and current revision are read every time.
+  router.get("/:slug", validate("params", slugParams), async (req, res) => {
+    sendRepresentation(req, res, await publicVehicleJson(ctx, (res.locals.params as { slug: string }).slug), "public, max-age=30");
   });
-  router.get("/:slug/revisions/:number", validate("params", slugParams.extend({ number: z.coerce.number().int().positive() })), async (_req, res) => {
+  router.get("/:slug/revisions/:number", validate("params", slugParams.extend({ number: z.coerce.number().int().positive() })), async (req, res) => {
     const { slug, number } = res.locals.params as { slug: string; number: number };
     // An older revision never changes, so it may be cached for long.
-    res.setHeader("Cache-Control", "public, max-age=86400");
-    res.json({ vehicle: await getPublic(ctx, slug, number) });
+    sendRepresentation(req, res, await publicVehicleJson(ctx, slug, number), "public, max-age=86400");
   });
   router.get("/:slug/qr.svg", validate("params", slugParams), async (_req, res) => {
     const { slug } = res.locals.params as { slug: string };
