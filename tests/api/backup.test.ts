@@ -84,7 +84,6 @@ afterAll(async () => {
 
 describe("backup and restore", () => {
   let consistentArchive = "";
-  let firstTarget: ReturnType<typeof freshTarget>;
 
   it("when the app keeps writing during a backup, then the restore is one snapshot: every write acknowledged before it began is there, and every file a row names is there with its hash", async () => {
     const sales = await t.signIn("sales");
@@ -117,10 +116,11 @@ describe("backup and restore", () => {
         if (edited.status !== 200) failures.push(`edit ${edited.status} ${JSON.stringify(edited.body)}`);
         else acked.push({ vehicleId: v.id, version: edited.body.vehicle.version });
         if (previous) {
+          // Once the worker has written every size: it bumps the photo's version, and the clean-up below has no grace
+          // period, so it must not race a write of ours.
+          await t.ctx.photoWorker.settled();
           const del = await deletePhoto(previous.vehicleId, previous.photoId);
           if (del.status !== 204 && del.status !== 200) failures.push(`delete ${del.status} ${JSON.stringify(del.body)}`);
-          // The clean-up with no grace period, once the worker has written every size (so it never races a write of ours).
-          await t.ctx.photoWorker.settled();
           await removeOrphans(t.ctx.database, t.ctx.storage, t.ctx.uploadsDir, { graceMs: 0 });
         }
         previous = { vehicleId: v.id, photoId: up.body.photos[0].id };
@@ -167,7 +167,7 @@ describe("backup and restore", () => {
     expect(cleanupDuringCopy).toEqual([]);
     console.log(`backup during writes: ${result.manifest.files.length} files, ${result.bytes} bytes; dump ${result.timings.dumpMs} ms, files ${result.timings.copyMs} ms, archive ${result.timings.archiveMs} ms, total ${result.timings.totalMs} ms; writer iterations during it: ${iterationsDuring}`);
 
-    firstTarget = freshTarget();
+    const firstTarget = freshTarget();
     const restored = await restore({ archive: result.path, databaseUrl: firstTarget.db.url, uploadsDir: firstTarget.uploadsDir });
     console.log(`restore of it: ${restored.rows} rows, ${restored.files} files; verify ${restored.timings.verifyMs} ms, load ${restored.timings.loadMs} ms, files ${restored.timings.filesMs} ms, checks ${restored.timings.checkMs} ms, total ${restored.timings.totalMs} ms`);
 
@@ -243,10 +243,13 @@ describe("backup and restore", () => {
     mkdirSync(path.join(target.uploadsDir, "photos"), { recursive: true });
     writeFileSync(path.join(target.uploadsDir, "photos", "left-behind.jpg"), "x");
     await expect(restore({ archive: consistentArchive, databaseUrl: target.db.url, uploadsDir: target.uploadsDir })).rejects.toThrow(/the uploads folder .* holds 1 file/);
-    // The first restore's target is full now; --force replaces it.
-    const forced = await restore({ archive: consistentArchive, databaseUrl: firstTarget.db.url, uploadsDir: firstTarget.uploadsDir, force: true });
-    expect(filesOf(firstTarget.uploadsDir).size).toBe(forced.files);
-    expect(await checksums(firstTarget.db.name)).toEqual(await checksums(t.ctx.config.DATABASE_URL.split("/").pop()!));
+    // A full target (the backup taken during writes, restored) is replaced with --force.
+    const full = freshTarget();
+    await restore({ archive: path.join(work, "during-writes.tar.gz"), databaseUrl: full.db.url, uploadsDir: full.uploadsDir });
+    await expect(restore({ archive: consistentArchive, databaseUrl: full.db.url, uploadsDir: full.uploadsDir })).rejects.toThrow(/Refusing/);
+    const forced = await restore({ archive: consistentArchive, databaseUrl: full.db.url, uploadsDir: full.uploadsDir, force: true });
+    expect(filesOf(full.uploadsDir).size).toBe(forced.files);
+    expect(await checksums(full.db.name)).toEqual(await checksums(t.ctx.config.DATABASE_URL.split("/").pop()!));
   }, 300_000);
 
   it("when the archive is truncated or corrupt, then restore refuses with a clear message and leaves the target untouched", async () => {
