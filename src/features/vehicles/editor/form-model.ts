@@ -16,9 +16,13 @@ export interface VehicleForm {
   serviceHistory: ServiceRow[];
 }
 
+/** The listing copy has its own editor (DescriptionEditor), not a row in FIELDS, but it is a value like the others. */
+const COPY = "description";
+
 export function emptyForm(distanceUnit: "km" | "mi"): VehicleForm {
   const values = Object.fromEntries(FIELDS.map((f) => [f.name, ""]));
   values.odometerUnit = distanceUnit;
+  values[COPY] = "";
   return { values, features: [], serviceHistory: [] };
 }
 
@@ -28,6 +32,7 @@ export function formFromVehicle(v: VehicleView): VehicleForm {
     const raw = (v as unknown as Record<string, unknown>)[f.name];
     values[f.name] = raw == null ? "" : f.kind === "money" ? String(Number(raw) / 100) : String(raw);
   }
+  values[COPY] = v.description ?? "";
   return {
     values,
     features: [...v.features],
@@ -58,6 +63,8 @@ export function formToInput(form: VehicleForm): Record<string, unknown> {
       out[f.name] = typeof n === "number" ? Math.round(n * 100) : n;
     } else out[f.name] = raw.trim() === "" ? null : raw.trim();
   }
+  const copy = form.values[COPY] ?? "";
+  out[COPY] = copy.trim() === "" ? null : copy.trim();
   out.features = form.features;
   out.serviceHistory = form.serviceHistory.map((r) => ({
     date: r.date,
