@@ -1,5 +1,5 @@
 import { createReadStream } from "node:fs";
-import { mkdir, readdir, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
+import { mkdir, open, readdir, readFile, rename, rm, stat } from "node:fs/promises";
 import { randomBytes } from "node:crypto";
 import path from "node:path";
 import type { Readable } from "node:stream";
@@ -24,6 +24,15 @@ export function assertKey(key: string): void {
   if (!KEY_PATTERN.test(key)) throw new Error(`refusing an unexpected storage key: ${key}`);
 }
 
+async function syncDirectory(dir: string) {
+  const handle = await open(dir, "r");
+  try {
+    await handle.sync();
+  } finally {
+    await handle.close();
+  }
+}
+
 export function localStorage(root: string): Storage {
   const dir = path.resolve(root);
   const full = (key: string) => {
@@ -33,11 +42,24 @@ export function localStorage(root: string): Storage {
   return {
     async put(key, data) {
       const target = full(key);
-      await mkdir(path.dirname(target), { recursive: true });
+      const created = await mkdir(path.dirname(target), { recursive: true });
       // Write beside, then rename: a crash leaves a .partial file (cleaned up later), never a half file under the key.
       const tmp = `${target}.${randomBytes(6).toString("hex")}.partial`;
-      await writeFile(tmp, data, { flag: "wx" });
+      const file = await open(tmp, "wx");
+      try {
+        await file.writeFile(data);
+        // On disk before the rename, and the rename on disk before put() returns: the row written next (whose commit
+        // MariaDB flushes) must never outlive its file in a power cut or kernel crash.
+        await file.sync();
+      } finally {
+        await file.close();
+      }
       await rename(tmp, target);
+      for (let d = path.dirname(target); ; d = path.dirname(d)) {
+        await syncDirectory(d);
+        // New shard folders: their own entries must be durable too, up to the first folder that already existed.
+        if (!created || d === path.dirname(created) || d === dir || d === path.dirname(d)) break;
+      }
     },
     read: (key) => readFile(full(key)),
     stream: (key) => createReadStream(full(key)),
