@@ -144,18 +144,21 @@ function cannon(url: string, seconds: number, children: Set<ChildProcess>): Prom
   });
 }
 
-const failures = (r: CannonRun) => r.errors + r.timeouts + r.non2xx;
+/** autocannon counts a timeout among its errors too. */
+const failures = (r: CannonRun) => r.errors + r.non2xx;
 const describe = (r: CannonRun) =>
   `${r.requests.average.toFixed(0)} req/s, p50 ${r.latency.p50} ms, p97.5 ${r.latency.p97_5} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms, ` +
   `${(r.throughput.total / Math.max(1, r.requests.total)).toFixed(0)} bytes/response, ${r.requests.total} requests` +
-  (failures(r) ? `; ${r.errors} errors, ${r.timeouts} timeouts, ${r.non2xx} non-2xx` : "; no errors");
+  (failures(r) ? `; ${r.errors} errors (${r.timeouts} of them timeouts), ${r.non2xx} non-2xx` : "; no errors");
 
 // ---------------------------------------------------------------------------------------------------------------
 // The server as deployed, in a child process.
 
 async function startServer(env: BenchEnv, port: number, databaseUrl: string, uploadsDir: string, children: Set<ChildProcess>): Promise<{ child: ChildProcess; stderr: () => string }> {
   const smtpPort = await freePort(); // nothing listens there; the bench sends no mail, and the sender retries quietly
-  const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
+  // BENCH_LOAD_CPU_PROF=<dir>: the server writes a V8 CPU profile there when it stops (open it in Chrome DevTools).
+  const prof = process.env.BENCH_LOAD_CPU_PROF ? ["--cpu-prof", "--cpu-prof-dir", path.resolve(process.env.BENCH_LOAD_CPU_PROF)] : [];
+  const child = spawn(process.execPath, [...prof, "--import", "tsx", "server/index.ts"], {
     cwd: ROOT,
     stdio: ["ignore", "ignore", "pipe"],
     env: {
@@ -411,11 +414,11 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
         lat("p97.5", "p97_5"),
         lat("p99", "p99"),
         {
-          figure: `${t.label}, ${CONNECTIONS} conn, errors + timeouts + non-2xx`,
+          figure: `${t.label}, ${CONNECTIONS} conn, errors (incl. timeouts) + non-2xx`,
           unit: "",
           value: failures(ours),
           samples: ours.requests.total,
-          failed: failures(ours) ? `${ours.errors} errors, ${ours.timeouts} timeouts, ${ours.non2xx} non-2xx of ${ours.requests.total}` : undefined,
+          failed: failures(ours) ? `${ours.errors} errors (${ours.timeouts} timeouts), ${ours.non2xx} non-2xx of ${ours.requests.total}` : undefined,
         },
       );
     }
@@ -444,11 +447,11 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
       { figure: `mixed: public API p99 with ${agents.length} staff agents saving`, unit: "ms", value: mixed.latency.p99, baseline: Math.max(1, apiAlone.latency.p99), baselineLabel: "public API alone", samples: mixed.requests.total },
       { figure: `mixed: public API requests/s with staff saving`, unit: "req/s", value: mixed.requests.average, baseline: apiAlone.requests.average, baselineLabel: "public API alone", higherIsBetter: true, samples: SECONDS },
       {
-        figure: "mixed: public API errors + timeouts + non-2xx",
+        figure: "mixed: public API errors (incl. timeouts) + non-2xx",
         unit: "",
         value: failures(mixed),
         samples: mixed.requests.total,
-        failed: failures(mixed) ? `${mixed.errors} errors, ${mixed.timeouts} timeouts, ${mixed.non2xx} non-2xx of ${mixed.requests.total}` : undefined,
+        failed: failures(mixed) ? `${mixed.errors} errors (${mixed.timeouts} timeouts), ${mixed.non2xx} non-2xx of ${mixed.requests.total}` : undefined,
       },
       { figure: "mixed: staff save p50", unit: "ms", value: percentile(mixedStats.saves, 50), baseline: percentile(aloneStats.saves, 50), baselineLabel: "agents saving alone", samples: mixedStats.saves.length },
       { figure: "mixed: staff save p99", unit: "ms", value: percentile(mixedStats.saves, 99), baseline: percentile(aloneStats.saves, 99), baselineLabel: "agents saving alone", samples: mixedStats.saves.length },

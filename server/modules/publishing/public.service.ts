@@ -6,6 +6,7 @@ import { presentPublicDealership, primaryDealership } from "../dealerships/deale
 import type { PublicListQuery, PublicSort } from "../../../shared/schemas/public-query.ts";
 import type { PublicStatus, PublicVehicle, PublicVehicleCard, RevisionSummary } from "../../../shared/schemas/public.ts";
 import type { Revision } from "../../db/schema/index.ts";
+import type { Db } from "../../db/client.ts";
 import { PublicCache, representation, type Representation } from "./public-cache.ts";
 
 /** Statuses whose newest revision the public may read. Withdrawn answers 410; anything else has never been public. */
@@ -99,6 +100,21 @@ export async function listPublic(ctx: AppContext, q: PublicListQuery) {
 
 const summary = (r: Pick<Revision, "number" | "publishedAt" | "changes">): RevisionSummary => ({ number: r.number, publishedAt: r.publishedAt.toISOString(), changes: r.changes });
 
+const locateStatements = new WeakMap<Db, ReturnType<typeof prepareLocate>>();
+const prepareLocate = (db: Db) =>
+  db
+    .select({ id: vehicles.id, status: vehicles.status, currentRevisionId: vehicles.currentRevisionId })
+    .from(vehicles)
+    .where(eq(vehicles.publicSlug, sql.placeholder("slug")))
+    .limit(1)
+    .prepare();
+/** Built once per database handle: the statement runs on every public read, so drizzle need not rebuild its SQL each time. */
+function locateStatement(db: Db) {
+  let s = locateStatements.get(db);
+  if (!s) locateStatements.set(db, (s = prepareLocate(db)));
+  return s;
+}
+
 interface Located {
   id: number;
   status: PublicStatus;
@@ -112,7 +128,7 @@ interface Located {
  */
 async function locate(ctx: AppContext, slug: string): Promise<Located> {
   const { db } = ctx.database;
-  const [v] = await db.select({ id: vehicles.id, status: vehicles.status, currentRevisionId: vehicles.currentRevisionId }).from(vehicles).where(eq(vehicles.publicSlug, slug)).limit(1);
+  const [v] = await locateStatement(db).execute({ slug });
   if (!v || !v.currentRevisionId) throw notFound("That vehicle");
   if (v.status === "withdrawn" || v.status === "archived") {
     const d = await primaryDealership(db);
