@@ -1,7 +1,7 @@
 /**
  * What a buyer's phone gets from a public condition page:
  *  - throughput of GET /api/public/vehicles/:slug through the whole app (autocannon, 10 connections, in its own
- *    process), against a plain node:http server in this same process answering the very same bytes from memory with
+ *    process), against a plain node:http server in this same process answering the very bytes the app sent (compressed as the app compressed them) from memory with
  *    the same content type. Runs alternate app / plain / app / plain, so both share the machine's noise;
  *  - the JavaScript the condition page /vehicles/:slug loads in headless Chromium (playwright-core): raw and gzip
  *    size of every script response, against the 120 kB aim and against the entry chunk alone; throws if any staff
@@ -319,14 +319,17 @@ async function throughput(env: BenchEnv, ctx: AppContext, base: string, slug: st
         : `the app does NOT compress it even when asked (Accept-Encoding: ${ACCEPT_ENCODING}) — autocannon measures the ${body.length} raw bytes`),
   );
 
+  // The very bytes the app puts on the wire for autocannon's Accept-Encoding (compressed, when the app compresses).
+  const wire = asked.body;
+  const wireHeaders: Record<string, string | number> = { "Content-Type": contentType, "Content-Length": wire.length, ...(encoding ? { "Content-Encoding": String(encoding), Vary: "Accept-Encoding" } : {}) };
   const reference = createServer((_req, res) => {
-    res.writeHead(200, { "Content-Type": contentType, "Content-Length": body.length });
-    res.end(body);
+    res.writeHead(200, wireHeaders);
+    res.end(wire);
   });
   servers.push(reference);
   const refBase = await listenOn(reference);
   const check = await rawGet(refBase, {});
-  if (!check.body.equals(body) || check.headers["content-type"] !== contentType) throw new Error("the plain server does not answer the app's bytes");
+  if (!check.body.equals(wire) || check.headers["content-type"] !== contentType) throw new Error("the plain server does not answer the app's bytes");
   const headerBytes = (h: IncomingHttpHeaders) => Object.entries(h).reduce((s, [k, v]) => s + k.length + String(v).length + 4, 0);
   env.log(`response headers: app ≈ ${headerBytes(plain.headers)} bytes (helmet, request id, cache-control…), plain ≈ ${headerBytes(check.headers)} bytes`);
 
@@ -352,7 +355,7 @@ async function throughput(env: BenchEnv, ctx: AppContext, base: string, slug: st
   const mean = (runs: CannonRun[], f: (r: CannonRun) => number) => runs.reduce((s, r) => s + f(r), 0) / runs.length;
   const seconds = SECONDS * 2;
   return [
-    { figure: "public vehicle API, requests/s (mean)", unit: "req/s", value: mean(app, (r) => r.requests.average), baseline: mean(ref, (r) => r.requests.average), baselineLabel: "same bytes, plain node:http", samples: seconds },
+    { figure: "public vehicle API, requests/s (mean)", unit: "req/s", value: mean(app, (r) => r.requests.average), baseline: mean(ref, (r) => r.requests.average), baselineLabel: "same bytes, plain node:http", higherIsBetter: true, samples: seconds },
     {
       figure: "public vehicle API, p99 latency",
       unit: "ms",
@@ -569,7 +572,7 @@ async function lighthouseFigures(env: BenchEnv, url: string, base: string, child
   const metric = (id: string) => median(runs.map((l) => l.audits[id]?.numericValue ?? Number.NaN));
   const n = runs.length;
   return [
-    { figure: `Lighthouse performance score (median of ${n})`, unit: "", value: median(runs.map(score)), baseline: AIM.score, baselineLabel: "aim", samples: n },
+    { figure: `Lighthouse performance score (median of ${n})`, unit: "", value: median(runs.map(score)), baseline: AIM.score, baselineLabel: "aim", higherIsBetter: true, samples: n },
     { figure: `Lighthouse LCP (median of ${n})`, unit: "ms", value: metric("largest-contentful-paint"), baseline: AIM.lcpMs, baselineLabel: "aim", samples: n },
     { figure: `Lighthouse CLS (median of ${n})`, unit: "", value: metric("cumulative-layout-shift"), baseline: AIM.cls, baselineLabel: "aim", samples: n },
     { figure: `Lighthouse TBT (median of ${n})`, unit: "ms", value: metric("total-blocking-time"), baseline: AIM.tbtMs, baselineLabel: "aim", samples: n },
