@@ -51,6 +51,10 @@ export class ServerProcess {
     const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], { cwd: ROOT, env: this.env, stdio: ["ignore", "pipe", "pipe"] });
     this.child = child;
     this.starts++;
+    // Never leave a server behind if the test process itself ends first.
+    const reap = () => child.kill("SIGKILL");
+    process.once("exit", reap);
+    child.once("exit", () => process.off("exit", reap));
     const keep = (chunk: Buffer) => {
       for (const line of chunk.toString("utf8").split("\n")) if (line.trim()) this.lines.push(line);
       if (this.lines.length > 200) this.lines.splice(0, this.lines.length - 200);
