@@ -22,9 +22,12 @@ import { ZONES } from "../../shared/constants/evidence.ts";
 const world = e2eWorld();
 let mail: Awaited<ReturnType<typeof catchMail>>;
 
+// Everyone is where the demo dealership is (server/db/seed/demo.ts: en-AU, Australia/Brisbane), so staff dates read
+// as they would at Fernhollow Motors.
+const WHERE = { locale: "en-AU", timezoneId: "Australia/Brisbane" };
 // A phone held in one hand on the yard or on the sofa (390 × 844 CSS px, common practice, no source).
-const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
-const DESK = { viewport: { width: 1366, height: 900 }, deviceScaleFactor: 1 };
+const PHONE = { ...WHERE, viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+const DESK = { ...WHERE, viewport: { width: 1366, height: 900 }, deviceScaleFactor: 1 };
 
 /** "Z9A" is the demo's invented maker prefix for Ambrel (server/db/seed/demo-vehicles.ts); position 9 is computed. */
 function demoVin(): string {
