@@ -79,7 +79,7 @@ export default function VehicleLayout() {
           ))}
         </ul>
       </nav>
-      <div className="grid gap-6 2xl:grid-cols-[1fr_22rem]">
+      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_19rem] 2xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0">
           <Outlet context={ctx} />
         </div>

@@ -54,6 +54,8 @@ export default function VehiclesRoute() {
   const locale = dealership.data?.dealership.locale ?? "en";
   const canCreate = user.role === "admin" || user.role === "sales";
   const filtered = [...params.keys()].some((k) => k !== "sort" && k !== "page");
+  const activeFilters = new Set([...params.keys()].filter((k) => k !== "sort" && k !== "page" && k !== "q").map((k) => k.replace(/From$|To$/, ""))).size;
+  const [showFilters, setShowFilters] = useState(false);
 
   function search(e: FormEvent) {
     e.preventDefault();
@@ -73,7 +75,11 @@ export default function VehiclesRoute() {
         <input id="stock-q" type="search" value={q} onChange={(e) => setQ(e.target.value)} placeholder="Stock no., VIN, plate, make, model" className={`${input} min-w-72 flex-1 font-mono`} />
         <Button type="submit" tone="secondary">Search</Button>
       </form>
-      <fieldset className="mb-6 grid gap-3 rounded-lg border border-line bg-paper-raised p-4 sm:grid-cols-2 lg:grid-cols-4">
+      {/* On a phone the filters fold away behind one button so the list starts on the first screen. */}
+      <Button type="button" tone="secondary" className="mb-4 sm:hidden" aria-expanded={showFilters} aria-controls="stock-filters" onClick={() => setShowFilters((v) => !v)}>
+        {showFilters ? "Hide filters" : activeFilters ? `Filters (${activeFilters} on)` : "Filters"}
+      </Button>
+      <fieldset id="stock-filters" className={`mb-6 gap-3 rounded-lg border border-line bg-paper-raised p-4 sm:grid sm:grid-cols-2 lg:grid-cols-4 ${showFilters ? "grid" : "hidden"}`}>
         <legend className="px-1 text-sm font-bold">Filters</legend>
         <label className="flex flex-col gap-1 text-sm font-bold">
           Status
