@@ -38,7 +38,7 @@ async function loadBenches(words: string[]): Promise<BenchModule[]> {
   return chosen;
 }
 
-const num = (n: number) => (!Number.isFinite(n) ? String(n) : Math.abs(n) >= 100 ? n.toFixed(0) : Math.abs(n) >= 10 ? n.toFixed(1) : n.toFixed(2));
+const num = (n: number) => (!Number.isFinite(n) || Number.isInteger(n) ? String(n) : Math.abs(n) >= 100 ? n.toFixed(0) : Math.abs(n) >= 10 ? n.toFixed(1) : n.toFixed(2));
 /** Every ratio reads "times worse than the baseline": value / baseline, or baseline / value where more is better. */
 const ratioOf = (r: BenchResult) => (r.baseline ? `${(r.higherIsBetter ? r.baseline / r.value : r.value / r.baseline).toFixed(2)}×` : "—");
 const ratioIs = (r: BenchResult) => (r.baseline === undefined ? "" : r.higherIsBetter ? "base ÷ ours" : "ours ÷ base");
@@ -198,7 +198,8 @@ async function main(): Promise<number> {
   mkdirSync(path.dirname(REPORT), { recursive: true });
   writeFileSync(REPORT, report);
   console.log(`\nwrote ${path.relative(process.cwd(), REPORT)}`);
-  if (!words.length && !stopping) {
+  // Every bench ran (a run cut short by a signal or a leaked rejection exits before this).
+  if (!words.length && outcomes.length === benches.length) {
     mkdirSync(path.dirname(DOCS_REPORT), { recursive: true });
     writeFileSync(DOCS_REPORT, report);
     console.log(`wrote ${path.relative(process.cwd(), DOCS_REPORT)} (a full run)`);
