@@ -21,7 +21,7 @@
  * sessions (sessions live in MariaDB, so the cookies work on the child).
  */
 import { spawn, type ChildProcess } from "node:child_process";
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
 import { createServer, request as httpRequest, type IncomingHttpHeaders, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { cpus, loadavg, tmpdir } from "node:os";
@@ -142,6 +142,46 @@ function cannon(url: string, seconds: number, children: Set<ChildProcess>): Prom
       resolve(JSON.parse(line) as CannonRun);
     });
   });
+}
+
+/** CPU time (ms) a process has used, from /proc/<pid>/stat (utime + stime, USER_HZ 100); undefined off Linux. */
+function procCpuMs(pid: number | undefined): number | undefined {
+  if (!pid) return undefined;
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+    const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100;
+  } catch {
+    return undefined;
+  }
+}
+
+/** The pid of this run's mariadbd (the one on the database URL's port). */
+function mariadbPid(databaseUrl: string): number | undefined {
+  const port = new URL(databaseUrl).port;
+  for (const entry of readdirSync("/proc").filter((e) => /^\d+$/.test(e))) {
+    try {
+      const cmd = readFileSync(`/proc/${entry}/cmdline`, "utf8");
+      if (cmd.includes("mariadbd") && cmd.includes(`--port=${port}`)) return Number(entry);
+    } catch {
+      /* gone */
+    }
+  }
+  return undefined;
+}
+
+/** Runs fn and says how much CPU the server, MariaDB and this process used meanwhile, in % of one core. */
+async function cpuDuring<T>(pids: { server?: number; db?: number }, fn: () => Promise<T>): Promise<{ result: T; line: string }> {
+  const t0 = performance.now();
+  const s0 = procCpuMs(pids.server);
+  const d0 = procCpuMs(pids.db);
+  const c0 = process.cpuUsage();
+  const result = await fn();
+  const wall = performance.now() - t0;
+  const pct = (a: number | undefined, b: number | undefined) => (a === undefined || b === undefined ? "?" : `${(((b - a) / wall) * 100).toFixed(0)}%`);
+  const c = process.cpuUsage(c0);
+  const line = `CPU: server ${pct(s0, procCpuMs(pids.server))}, MariaDB ${pct(d0, procCpuMs(pids.db))}, bench process ${(((c.user + c.system) / 1000 / wall) * 100).toFixed(0)}% of a core`;
+  return { result, line };
 }
 
 /** autocannon counts a timeout among its errors too. */
@@ -382,6 +422,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
 
     const results: BenchResult[] = [];
     const alone = new Map<string, CannonRun>();
+    const pids = { server: server.pid, db: mariadbPid(database.url) };
     for (const t of targets) {
       const wire = await rawGet(t.url, { "Accept-Encoding": ACCEPT_ENCODING });
       if (wire.status !== 200) throw new Error(`GET ${t.url}: ${wire.status} ${wire.body.toString().slice(0, 300)}`);
@@ -393,10 +434,12 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
       );
       await cannon(t.url, WARMUP_SECONDS, children);
       await cannon(plain.url, WARMUP_SECONDS, children);
-      const ours = await cannon(t.url, SECONDS, children);
-      env.log(`  ours : ${describe(ours)}`);
-      const ref = await cannon(plain.url, SECONDS, children);
-      env.log(`  plain: ${describe(ref)}`);
+      const o = await cpuDuring(pids, () => cannon(t.url, SECONDS, children));
+      const ours = o.result;
+      env.log(`  ours : ${describe(ours)}; ${o.line}`);
+      const r = await cpuDuring(pids, () => cannon(plain.url, SECONDS, children));
+      const ref = r.result;
+      env.log(`  plain: ${describe(ref)}; ${r.line} (the plain server lives in the bench process)`);
       alone.set(t.key, ours);
       await closeServer(plain.server);
       const base1 = (x: number) => Math.max(1, x); // autocannon counts whole ms; a 0 reads as "under 1 ms"
@@ -430,12 +473,15 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
 
     const mixedStats = newStats();
     const apiUrl = targets[1]!.url;
-    const [mixed] = await Promise.all([
-      cannon(apiUrl, SECONDS, children),
-      // autocannon takes a moment to start its connections; the agents run for the whole of its window.
-      runAgents(base, agents, performance.now() + SECONDS * 1000, photo, mixedStats, true),
-    ]);
-    env.log(`mixed, public API: ${describe(mixed)}`);
+    const m = await cpuDuring(pids, () =>
+      Promise.all([
+        cannon(apiUrl, SECONDS, children),
+        // autocannon takes a moment to start its connections; the agents run for the whole of its window.
+        runAgents(base, agents, performance.now() + SECONDS * 1000, photo, mixedStats, true),
+      ]),
+    );
+    const [mixed] = m.result;
+    env.log(`mixed, public API: ${describe(mixed)}; ${m.line}`);
     env.log(
       `mixed, agents: ${mixedStats.saves.length} saves, p50 ${percentile(mixedStats.saves, 50).toFixed(1)} ms, p99 ${percentile(mixedStats.saves, 99).toFixed(1)} ms; ` +
         `${mixedStats.uploads.length} photo uploads (640 px JPEG, ${(photo.length / 1000).toFixed(0)} kB), p50 ${percentile(mixedStats.uploads, 50).toFixed(0)} ms; ${statusLine(mixedStats)}`,

@@ -1,8 +1,9 @@
 /**
  * What a buyer's phone gets from a public condition page:
  *  - throughput of GET /api/public/vehicles/:slug through the whole app (autocannon, 10 connections, in its own
- *    process), against a plain node:http server in this same process answering the very bytes the app sent (compressed as the app compressed them) from memory with
- *    the same content type. Runs alternate app / plain / app / plain, so both share the machine's noise;
+ *    process), against a plain node:http server in this same process answering from memory the very bytes the app
+ *    sent (compressed as the app compressed them) with the same content type and encoding. Runs alternate app / plain
+ *    / app / plain, so both share the machine's noise;
  *  - the JavaScript the condition page /vehicles/:slug loads in headless Chromium (playwright-core): raw and gzip
  *    size of every script response, against the 120 kB aim and against the entry chunk alone; throws if any staff
  *    chunk is loaded;
