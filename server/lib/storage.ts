@@ -99,3 +99,29 @@ export async function removeListed(root: string, key: string): Promise<void> {
   if (key.includes("..") || path.isAbsolute(key)) return;
   await rm(path.join(path.resolve(root), key), { force: true });
 }
+
+/**
+ * Removes a finished file only if it is still as old as the clean-up saw it. An upload of the same bytes writes the
+ * same key afresh (put() always writes) and then its row, so the file is first moved aside atomically under a
+ * `.partial` name: if what was moved turns out to be new (a put() landed between the listing and now), it goes
+ * back; a crash in between leaves only a `.partial` file, which the next pass removes. Returns whether it removed.
+ */
+export async function removeIfOlder(root: string, key: string, cutoffMs: number): Promise<boolean> {
+  if (key.includes("..") || path.isAbsolute(key)) return false;
+  const target = path.join(path.resolve(root), key);
+  const before = await stat(target).catch(() => null);
+  if (!before || before.mtime.getTime() > cutoffMs) return false;
+  const aside = `${target}.${randomBytes(6).toString("hex")}.removing.partial`;
+  try {
+    await rename(target, aside);
+  } catch {
+    return false;
+  }
+  const moved = await stat(aside).catch(() => null);
+  if (moved && moved.mtime.getTime() > cutoffMs) {
+    await rename(aside, target);
+    return false;
+  }
+  await rm(aside, { force: true });
+  return true;
+}

@@ -2,12 +2,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import sharp from "sharp";
 import http from "node:http";
-import { readdirSync, statSync } from "node:fs";
+import { readdirSync, statSync, utimesSync } from "node:fs";
 import path from "node:path";
 import { ORIGIN, startTestApp, type TestApp } from "../support/app.ts";
 import { dieselSuv } from "../support/vehicles.ts";
 import { landscapeJpeg, pngDeclaring, SVG_WITH_SCRIPT } from "../support/images.ts";
 import { removeOrphans } from "../../server/modules/photos/cleanup.ts";
+import { removeIfOlder } from "../../server/lib/storage.ts";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -203,5 +204,22 @@ describe("arranging photos", () => {
     expect(removed.length).toBeGreaterThan(0);
     const [rows] = await t.ctx.database.pool.query("select master_key as k from photos");
     for (const r of rows as Array<{ k: string }>) expect(statSync(path.join(t.ctx.uploadsDir, r.k)).isFile()).toBe(true);
+  });
+
+  it("when the same bytes are stored again while their old orphaned copy is being removed, then the fresh file stays", async () => {
+    const key = `photos/ee/${"e".repeat(64)}.jpg`;
+    const file = path.join(t.ctx.uploadsDir, key);
+    await t.ctx.storage.put(key, Buffer.from("old copy"));
+    const anHourAgo = new Date(Date.now() - 2 * 60 * 60 * 1000);
+    utimesSync(file, anHourAgo, anHourAgo);
+    const cutoff = Date.now() - 60 * 60 * 1000;
+    // An upload writes the key afresh after the clean-up listed the old copy, then its row.
+    await t.ctx.storage.put(key, Buffer.from("old copy"));
+    expect(await removeIfOlder(t.ctx.uploadsDir, key, cutoff)).toBe(false);
+    expect(statSync(file).isFile()).toBe(true);
+    // Left alone, an old unreferenced copy is removed, and nothing is left beside it.
+    utimesSync(file, anHourAgo, anHourAgo);
+    expect(await removeIfOlder(t.ctx.uploadsDir, key, cutoff)).toBe(true);
+    expect(readdirSync(path.dirname(file))).toEqual([]);
   });
 });

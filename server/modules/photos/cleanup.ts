@@ -1,7 +1,7 @@
 import { isNotNull } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
 import { defects, photos, revisionMedia } from "../../db/schema/index.ts";
-import { removeListed, type Storage } from "../../lib/storage.ts";
+import { removeIfOlder, removeListed, type Storage } from "../../lib/storage.ts";
 
 /** Other modules (published revisions) register the keys they still need. */
 export type KeySource = (database: Database) => Promise<Iterable<string>>;
@@ -37,14 +37,23 @@ export async function removeOrphans(database: Database, storage: Storage, root: 
     const [[lock]] = (await conn.query("SELECT GET_LOCK(CONCAT(DATABASE(), ':files'), 0) AS got")) as unknown as [[{ got: number | null }]];
     if (!lock?.got) return [];
     try {
-      const keys = await referencedKeys(database);
+      const before = await referencedKeys(database);
       const removed: string[] = [];
+      const candidates: string[] = [];
       for await (const file of storage.list()) {
         if (file.modifiedAt.getTime() > cutoff) continue;
-        if (file.partial || !keys.has(file.key)) {
+        if (file.partial) {
           await removeListed(root, file.key);
           removed.push(file.key);
-        }
+        } else if (!before.has(file.key)) candidates.push(file.key);
+      }
+      if (!candidates.length) return removed;
+      // Read the references again after listing: a row written meanwhile (an upload of bytes whose old copy was
+      // orphaned) keeps its file. removeIfOlder() covers the last gap, a put() between this read and the removal.
+      const after = await referencedKeys(database);
+      for (const key of candidates) {
+        if (after.has(key)) continue;
+        if (await removeIfOlder(root, key, cutoff)) removed.push(key);
       }
       return removed;
     } finally {
