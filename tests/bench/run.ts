@@ -105,6 +105,9 @@ function markdown(outcomes: Outcome[], words: string[]): string {
     "  speed; a bench that failed outright is listed with its error. The run then exits 1.",
     "- Latency percentiles from autocannon are whole milliseconds; a baseline under 1 ms is shown as 1 ms, and the ratio is",
     "  then a lower bound.",
+    "- What each bench does, its data and its knobs (environment variables) are described at the top of",
+    "  `tests/bench/<name>.bench.ts`; the console output of a run has the diagnostic lines (CPU per process, bytes per",
+    "  response, the costliest Lighthouse audits) behind each figure.",
     "",
   ];
   for (const o of outcomes) {
