@@ -55,7 +55,7 @@ export function createApp(ctx: AppContext): Express {
         directives: {
           "default-src": ["'self'"],
           "script-src": ["'self'"],
-          "style-src": ["'self'", "'unsafe-inline'"],
+          "style-src": ["'self'"],
           "img-src": ["'self'", "data:", "blob:"],
           "font-src": ["'self'"],
           "connect-src": ["'self'"],

@@ -1,3 +1,4 @@
+import { config as zodConfig } from "zod/v4/core";
 import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
 import { QueryClientProvider } from "@tanstack/react-query";
@@ -5,6 +6,9 @@ import { RouterProvider } from "react-router";
 import { createQueryClient } from "./lib/query-client.ts";
 import { router } from "./app/router.tsx";
 import "./styles.css";
+
+// Our CSP forbids eval; without this, zod probes `new Function` once per page and the browser logs the refusal.
+zodConfig({ jitless: true });
 
 const queryClient = createQueryClient();
 

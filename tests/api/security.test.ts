@@ -317,6 +317,8 @@ describe("security headers", () => {
     expect(scripts, what).not.toContain("'unsafe-inline'");
     expect(scripts, what).not.toContain("'unsafe-eval'");
     expect(policy["script-src-attr"] ?? ["'none'"], what).not.toContain("'unsafe-inline'");
+    // Styles too: the one inline <style> the app had (the print footer) is a constructed stylesheet now.
+    expect(policy["style-src"] ?? policy["default-src"] ?? [], what).not.toContain("'unsafe-inline'");
     expect(policy["frame-ancestors"], what).toEqual(["'none'"]);
     expect(policy["object-src"], what).toEqual(["'none'"]);
     expect(res.headers["x-content-type-options"], what).toBe("nosniff");

@@ -102,7 +102,14 @@ const cssString = (text: string) => `"${text.replace(/\\/g, "\\\\").replace(/"/g
 /** The printed page's footer: the page's address, the revision and its date on every sheet, and the page count. */
 function PrintPage({ url, revision, published }: { url: string; revision: number; published: string }) {
   const left = cssString(`${shortUrl(url)} · revision ${revision}, published ${published}`);
-  return (
-    <style>{`@page report { @bottom-left { content: ${left}; } @bottom-right { content: "Page " counter(page) " of " counter(pages); } }`}</style>
-  );
+  // A constructed stylesheet rather than a <style> element, so the CSP needs no 'unsafe-inline' for styles.
+  useEffect(() => {
+    const sheet = new CSSStyleSheet();
+    sheet.replaceSync(`@page report { @bottom-left { content: ${left}; } @bottom-right { content: "Page " counter(page) " of " counter(pages); } }`);
+    document.adoptedStyleSheets = [...document.adoptedStyleSheets, sheet];
+    return () => {
+      document.adoptedStyleSheets = document.adoptedStyleSheets.filter((s) => s !== sheet);
+    };
+  }, [left]);
+  return null;
 }
