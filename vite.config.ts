@@ -39,6 +39,8 @@ export default defineConfig({
     globalSetup: [here("./tests/support/global-setup.ts")],
     include: ["tests/**/*.test.ts"],
     testTimeout: 90_000,
+    // expect.poll waits for the page or a background worker; 1 s (the default) is too short on a busy 2-core machine.
+    expect: { poll: { timeout: 15_000 } },
     hookTimeout: 120_000,
     fileParallelism: true,
     maxWorkers: 2,

@@ -87,6 +87,7 @@ export const ROUTE_POLICY: Record<string, readonly Caller[]> = {
   "POST /api/mail/outbox/retry": ADMIN,
   "GET /api/mail/captured": ADMIN,
   "GET /api/mail/captured/:id": ADMIN,
+  "GET /api/mail/captured/:id/html": ADMIN,
 
   "GET /api/feeds": FEEDS,
   "POST /api/feeds": FEEDS,

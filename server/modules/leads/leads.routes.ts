@@ -80,5 +80,21 @@ export function mailRoutes(ctx: AppContext): Router {
     if (!m) throw notFound("That mail");
     res.json({ mail: { ...m, receivedAt: m.receivedAt.toISOString() } });
   });
+  // A mail's HTML as its own document for the viewer's sandboxed frame. Mails carry inline styles, which the app's
+  // own policy refuses (a srcdoc frame would inherit it); this answer gets a policy of its own: styles and our images
+  // only, no scripts, a sandbox, framed by our pages alone.
+  router.get("/captured/:id/html", validate("params", idParams), async (_req, res) => {
+    if (!ctx.config.demoMail) throw notFound("Captured mail (demo mode only)");
+    const [m] = await ctx.database.db.select({ html: capturedMail.html }).from(capturedMail).where(eq(capturedMail.id, (res.locals.params as { id: number }).id));
+    if (!m?.html) throw notFound("That mail's HTML");
+    res
+      .set({
+        "Content-Type": "text/html; charset=utf-8",
+        "Content-Security-Policy": "default-src 'none'; style-src 'unsafe-inline'; img-src 'self' data:; sandbox; frame-ancestors 'self'",
+        "Cache-Control": "no-store",
+        "X-Frame-Options": "SAMEORIGIN",
+      })
+      .send(m.html);
+  });
   return router;
 }

@@ -66,7 +66,7 @@ export function CapturedMail() {
               ))}
             </div>
             {view === "html" && m.html ? (
-              <iframe title={`HTML of “${m.subject}”`} sandbox="" srcDoc={m.html} className="mt-3 h-[32rem] w-full rounded-md border border-line bg-white" />
+              <iframe title={`HTML of “${m.subject}”`} sandbox="" src={`/api/mail/captured/${m.id}/html`} className="mt-3 h-[32rem] w-full rounded-md border border-line bg-white" />
             ) : (
               <pre className="mt-3 max-h-[32rem] overflow-auto whitespace-pre-wrap rounded-md border border-line bg-paper p-4 font-mono text-sm">{m.text || "(no plain-text part)"}</pre>
             )}
