@@ -125,3 +125,19 @@ export async function removeIfOlder(root: string, key: string, cutoffMs: number)
   await rm(aside, { force: true });
   return true;
 }
+
+/** What removeIfOlder() names a file it has moved aside: `<key>.<12 hex>.removing.partial`. */
+const ASIDE = /^(.+)\.[0-9a-f]{12}\.removing\.partial$/;
+
+/**
+ * A file left aside by a clean-up that died between moving it and deciding: when its key is referenced and no file
+ * holds the key, it is put back (a put() of the same bytes raced the move). Returns whether it did.
+ */
+export async function returnIfNeeded(root: string, listedKey: string, referenced: Set<string>): Promise<boolean> {
+  const key = ASIDE.exec(listedKey)?.[1];
+  if (!key || !referenced.has(key) || key.includes("..") || path.isAbsolute(key)) return false;
+  const base = path.resolve(root);
+  if (await stat(path.join(base, key)).then(() => true, () => false)) return false;
+  await rename(path.join(base, listedKey), path.join(base, key));
+  return true;
+}

@@ -2,13 +2,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import sharp from "sharp";
 import http from "node:http";
-import { readdirSync, statSync, utimesSync } from "node:fs";
+import { readdirSync, renameSync, statSync, utimesSync } from "node:fs";
 import path from "node:path";
 import { ORIGIN, startTestApp, type TestApp } from "../support/app.ts";
 import { dieselSuv } from "../support/vehicles.ts";
 import { landscapeJpeg, pngDeclaring, SVG_WITH_SCRIPT } from "../support/images.ts";
 import { removeOrphans } from "../../server/modules/photos/cleanup.ts";
-import { removeIfOlder } from "../../server/lib/storage.ts";
+import { removeIfOlder, returnIfNeeded } from "../../server/lib/storage.ts";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -220,6 +220,19 @@ describe("arranging photos", () => {
     // Left alone, an old unreferenced copy is removed, and nothing is left beside it.
     utimesSync(file, anHourAgo, anHourAgo);
     expect(await removeIfOlder(t.ctx.uploadsDir, key, cutoff)).toBe(true);
-    expect(readdirSync(path.dirname(file))).toEqual([]);
+    expect(readdirSync(path.dirname(file)).filter((n) => n.startsWith("e".repeat(64)))).toEqual([]);
+  });
+
+  it("when a clean-up died with a referenced file moved aside, then the next pass puts it back instead of deleting it", async () => {
+    const key = `photos/ed/${"d".repeat(64)}.jpg`;
+    const file = path.join(t.ctx.uploadsDir, key);
+    await t.ctx.storage.put(key, Buffer.from("needed"));
+    const aside = `${key}.0123456789ab.removing.partial`;
+    renameSync(file, path.join(t.ctx.uploadsDir, aside));
+    expect(await returnIfNeeded(t.ctx.uploadsDir, aside, new Set([key]))).toBe(true);
+    expect(statSync(file).isFile()).toBe(true);
+    // Not referenced (or the key already holds a file): left for the pass to remove as an unfinished write.
+    renameSync(file, path.join(t.ctx.uploadsDir, aside));
+    expect(await returnIfNeeded(t.ctx.uploadsDir, aside, new Set())).toBe(false);
   });
 });

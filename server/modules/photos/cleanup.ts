@@ -1,7 +1,7 @@
 import { isNotNull } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
 import { defects, photos, revisionMedia } from "../../db/schema/index.ts";
-import { removeIfOlder, removeListed, type Storage } from "../../lib/storage.ts";
+import { removeIfOlder, removeListed, returnIfNeeded, type Storage } from "../../lib/storage.ts";
 
 /** Other modules (published revisions) register the keys they still need. */
 export type KeySource = (database: Database) => Promise<Iterable<string>>;
@@ -33,6 +33,7 @@ export async function removeOrphans(database: Database, storage: Storage, root: 
   // must not see a file removed that a row in that snapshot names. Held for the whole pass; when a backup holds it,
   // this pass is skipped (the next hourly one catches up).
   const conn = await database.pool.getConnection();
+  let released = true;
   try {
     const [[lock]] = (await conn.query("SELECT GET_LOCK(CONCAT(DATABASE(), ':files'), 0) AS got")) as unknown as [[{ got: number | null }]];
     if (!lock?.got) return [];
@@ -43,6 +44,8 @@ export async function removeOrphans(database: Database, storage: Storage, root: 
       for await (const file of storage.list()) {
         if (file.modifiedAt.getTime() > cutoff) continue;
         if (file.partial) {
+          // A file moved aside by a pass that died before it could put it back: if a row needs it, it goes back.
+          if (await returnIfNeeded(root, file.key, before)) continue;
           await removeListed(root, file.key);
           removed.push(file.key);
         } else if (!before.has(file.key)) candidates.push(file.key);
@@ -57,9 +60,14 @@ export async function removeOrphans(database: Database, storage: Storage, root: 
       }
       return removed;
     } finally {
-      await conn.query("SELECT RELEASE_LOCK(CONCAT(DATABASE(), ':files'))");
+      await conn.query("SELECT RELEASE_LOCK(CONCAT(DATABASE(), ':files'))").catch(() => {
+        // A connection that could not release the lock must not go back to the pool still holding it (every later
+        // pass and every backup would wait on it); closing it releases the lock.
+        released = false;
+      });
     }
   } finally {
-    conn.release();
+    if (released) conn.release();
+    else conn.destroy();
   }
 }
