@@ -23,7 +23,8 @@
  */
 import { spawn } from "node:child_process";
 import { createReadStream, createWriteStream } from "node:fs";
-import { chmod, copyFile, link, mkdir, mkdtemp, open, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
+import { pipeline } from "node:stream/promises";
+import { copyFile, link, mkdir, mkdtemp, open, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
 import { createInterface } from "node:readline";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
@@ -60,13 +61,25 @@ const stamp = (d: Date) => d.toISOString().slice(0, 19).replace(/:/g, "-") + "Z"
 function run(binary: string, args: string[], stdoutFile: string): Promise<void> {
   return new Promise((resolve, reject) => {
     const out = createWriteStream(stdoutFile, { mode: 0o600 });
-    const child = spawn(binary, args, { stdio: ["ignore", "pipe", "pipe"] });
+    let writeError: Error | null = null;
+    let child: ReturnType<typeof spawn> | null = null;
+    // A full disk or a vanished folder: a clear message, and the dump stopped rather than writing into nothing.
+    out.on("error", (err) => {
+      writeError ??= new Error(`Writing ${stdoutFile} failed: ${err.message}`);
+      child?.kill();
+    });
+    child = spawn(binary, args, { stdio: ["ignore", "pipe", "pipe"] });
     let stderr = "";
-    child.stderr.on("data", (d) => (stderr += d));
-    child.stdout.pipe(out);
+    child.stderr!.on("data", (d) => (stderr += d));
+    child.stdout!.pipe(out);
     child.on("error", reject);
     child.on("close", (code) => {
-      out.close(() => (code === 0 ? resolve() : reject(new Error(`${path.basename(binary)} failed (exit ${code}): ${stderr.trim()}`))));
+      const done = () => {
+        if (writeError) reject(writeError);
+        else if (code === 0) resolve();
+        else reject(new Error(`${path.basename(binary)} failed (exit ${code}): ${stderr.trim()}`));
+      };
+      out.close(() => done());
     });
   });
 }
@@ -126,14 +139,19 @@ export async function backup(options: BackupOptions): Promise<BackupResult> {
   const started = Date.now();
   const createdAt = new Date();
   const out = path.resolve(options.out ?? path.join("backups", `forthright-${stamp(createdAt)}.tar.gz`));
-  await mkdir(path.dirname(out), { recursive: true });
+  // Backups hold password hashes and session ids: a folder we create is the owner's only (an existing one is left as is).
+  await mkdir(path.dirname(out), { recursive: true, mode: 0o700 });
   const uploadsDir = path.resolve(options.uploadsDir);
-  // Staging beside the archive: usually the same file system as the uploads, so files can be hard-linked.
-  const staging = await mkdtemp(path.join(path.dirname(out), ".forthright-backup-"));
-  const defaults = await defaultsFileFor(options.databaseUrl);
-  const conn = await mysql.createConnection({ uri: options.databaseUrl });
   const timings = { dumpMs: 0, copyMs: 0, archiveMs: 0, totalMs: 0 };
+  let staging: string | null = null;
+  let defaults: Awaited<ReturnType<typeof defaultsFileFor>> | null = null;
+  let conn: mysql.Connection | null = null;
   try {
+    // Staging beside the archive: usually the same file system as the uploads, so files can be hard-linked.
+    // mkdtemp makes it 0700, so the dump inside is private too.
+    staging = await mkdtemp(path.join(path.dirname(out), ".forthright-backup-"));
+    defaults = await defaultsFileFor(options.databaseUrl);
+    conn = await mysql.createConnection({ uri: options.databaseUrl });
     const [[server]] = (await conn.query("SELECT VERSION() AS version")) as unknown as [[{ version: string }]];
     const migration = await latestMigration(conn);
     const wait = options.lockWaitSeconds ?? 60;
@@ -180,10 +198,16 @@ export async function backup(options: BackupOptions): Promise<BackupResult> {
     await writeFile(path.join(staging, MANIFEST_NAME), JSON.stringify(manifest, null, 2) + "\n", { mode: 0o600 });
     // Written under a temporary name, flushed, then renamed: a crash never leaves a half archive under the real name.
     const partial = `${out}.partial`;
-    // gzip level 1: the photos (nearly all the bytes) are compressed already; the dump still shrinks several-fold.
-    await tar.create({ gzip: { level: 1 }, file: partial, cwd: staging, portable: true }, [MANIFEST_NAME, DUMP_NAME, "uploads"]);
-    // The dump holds password hashes and session ids: readable by the owner only.
-    await chmod(partial, 0o600);
+    // The dump holds password hashes and session ids: the file is created readable by the owner only, before a
+    // byte is written ("wx": never into someone else's file). gzip level 1: the photos (nearly all the bytes) are
+    // compressed already; the dump still shrinks several-fold.
+    await rm(partial, { force: true }); // a crashed earlier run's leftover
+    await pipeline(
+      tar.create({ gzip: { level: 1 }, cwd: staging, portable: true }, [MANIFEST_NAME, DUMP_NAME, "uploads"]),
+      createWriteStream(partial, { flags: "wx", mode: 0o600 }),
+    ).catch((err: Error) => {
+      throw new Error(`Writing the archive ${partial} failed: ${err.message}`);
+    });
     const handle = await open(partial, "r+");
     await handle.sync();
     await handle.close();
@@ -201,14 +225,16 @@ export async function backup(options: BackupOptions): Promise<BackupResult> {
     if (vanished.length) log(`  warning: ${vanished.length} file(s) vanished while copying (deleted by something that does not take the files lock): ${vanished.slice(0, 5).join(", ")}`);
     return { path: out, bytes, manifest, timings };
   } finally {
-    await conn.end().catch(() => undefined);
-    await defaults.remove();
-    await rm(staging, { recursive: true, force: true });
+    await conn?.end().catch(() => undefined);
+    await defaults?.remove();
+    if (staging) await rm(staging, { recursive: true, force: true });
     await rm(`${out}.partial`, { force: true });
   }
 }
 
 async function cli() {
+  // Everything this process creates (folder, staging, archive) is the owner's only, whatever the shell's umask.
+  process.umask(0o077);
   const { values } = parseArgs({ options: { out: { type: "string", short: "o" }, help: { type: "boolean", short: "h" } } });
   if (values.help) {
     console.log("Usage: npm run backup -- [--out file.tar.gz]\nBacks up the database (DATABASE_URL, or the local MariaDB under .data/) and UPLOADS_DIR.");

@@ -4,11 +4,22 @@
  *
  * 1. Unpacks into a private staging folder and checks the manifest and the sha256 of the dump and of every file
  *    before anything in the target is touched. A truncated or corrupt archive stops here with a message saying so.
- * 2. Refuses a target database with rows in any table, or an uploads folder with files in it, unless --force
- *    (which drops every table and the stored files first). Empty tables, such as a freshly migrated database, are fine.
- * 3. Loads the dump with the `mariadb` client, moves the files into place (rename, never a half file under a key).
- * 4. Checks again: each restored file's sha256, each table's row count against the manifest, and that every file a
- *    restored row refers to is present. Prints a summary.
+ * 2. Finds the `mariadb` client and runs `SELECT 1` through it with the target's credentials, and takes the files
+ *    lock (`<db>:files`, as the backup and the orphan clean-up do) for the whole restore, so no clean-up deletes
+ *    files under it.
+ * 3. Refuses a target database with rows in any table, or an uploads folder with files under photos/ or closeups/,
+ *    unless --force (which replaces them). Empty tables, such as a freshly migrated database, are fine; so are
+ *    dotfiles in the uploads folder (the checkout's .gitkeep). Anything else in the uploads folder is refused even
+ *    with --force: the restore removes only what storage holds, never unrelated data.
+ * 4. Only now touches the target: moves the old photos/ and closeups/ aside (renamed to .restore-old-<id>-<name>
+ *    beside them), drops the tables, loads the dump with the `mariadb` client and moves the files into place
+ *    (rename, never a half file under a key).
+ * 5. Checks again: each restored file's sha256, each table's row count against the manifest, and that every file a
+ *    restored row refers to is present. Prints a summary. Only then are the old files deleted; if the load or a
+ *    check fails, the restored files are removed and the old ones put back.
+ *    The database is not kept aside like that: the tables are dropped and the dump is loaded in place, so a load
+ *    that fails part-way (the client was checked just before, and the archive verified) leaves a partial database;
+ *    restore it again.
  * Stop the server (or every instance) while restoring: the restore replaces what it reads.
  */
 import { spawn } from "node:child_process";
@@ -25,7 +36,7 @@ import { migrationsFolder } from "../server/db/migrate.ts";
 import { KEY_PATTERN } from "../server/lib/storage.ts";
 import { referencedKeys } from "../server/modules/photos/cleanup.ts";
 import {
-  DUMP_NAME, MANIFEST_NAME, UPLOADS_PREFIX, clientBinary, defaultsFileFor, manifestSchema, seconds, serverSettings, sha256File, type Manifest,
+  DUMP_NAME, FILES_LOCK_SQL, MANIFEST_NAME, UPLOADS_PREFIX, clientBinary, defaultsFileFor, manifestSchema, seconds, serverSettings, sha256File, type Manifest,
 } from "./backup-archive.ts";
 
 export interface RestoreOptions {
@@ -34,6 +45,8 @@ export interface RestoreOptions {
   uploadsDir: string;
   force?: boolean;
   log?: (line: string) => void;
+  /** Seconds to wait for the files lock (a clean-up pass or a backup holds it for a while). */
+  lockWaitSeconds?: number;
 }
 
 export interface RestoreResult {
@@ -129,6 +142,45 @@ async function tablesWithRows(conn: mysql.Connection): Promise<{ all: string[]; 
   return { all: rows.map((r) => r.name), withRows };
 }
 
+/** The folders storage keeps files in (server/lib/storage.ts, list()); the only ones a restore replaces. */
+const STORED = ["photos", "closeups"] as const;
+const ASIDE_PREFIX = ".restore-old-";
+
+/**
+ * What the uploads folder holds: files under the stored folders, and anything else that is not a dotfile (a
+ * checkout's .gitkeep is fine). Moved-aside folders from an interrupted restore count as unexpected, so they are seen.
+ */
+async function inspectUploads(uploadsDir: string): Promise<{ files: number; unexpected: string[] }> {
+  const entries = await readdir(uploadsDir, { withFileTypes: true }).catch((err: NodeJS.ErrnoException) => {
+    if (err.code === "ENOENT") return [];
+    throw err;
+  });
+  let files = 0;
+  const unexpected: string[] = [];
+  for (const e of entries) {
+    if ((STORED as readonly string[]).includes(e.name) && e.isDirectory()) files += (await filesUnder(uploadsDir, e.name)).length;
+    else if (e.name.startsWith(ASIDE_PREFIX)) unexpected.push(`${e.name} (left by an interrupted restore: the files it replaced)`);
+    else if (!e.name.startsWith(".")) unexpected.push(e.name);
+  }
+  return { files, unexpected };
+}
+
+/** Runs one statement through the client binary, so a missing or misconfigured client stops us before any change. */
+function checkClient(binary: string, defaultsFile: string, database: string): Promise<void> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(binary, [`--defaults-file=${defaultsFile}`, "--batch", "--skip-column-names", "-e", "SELECT 1", database], { stdio: ["ignore", "pipe", "pipe"] });
+    let output = "";
+    child.stdout.on("data", (d) => (output += d));
+    child.stderr.on("data", (d) => (output += d));
+    child.on("error", (err) => reject(new RestoreError(`The MariaDB client ${binary} could not be started (${err.message}); nothing was changed.`)));
+    child.on("close", (code) =>
+      code === 0 && output.trim() === "1"
+        ? resolve()
+        : reject(new RestoreError(`The MariaDB client ${path.basename(binary)} could not query ${database} (exit ${code}): ${output.trim().slice(0, 500)}; nothing was changed.`)),
+    );
+  });
+}
+
 function load(binary: string, defaultsFile: string, database: string, dumpFile: string): Promise<void> {
   return new Promise((resolve, reject) => {
     const child = spawn(binary, [`--defaults-file=${defaultsFile}`, "--batch", database], { stdio: ["pipe", "ignore", "pipe"] });
@@ -146,14 +198,34 @@ export async function restore(options: RestoreOptions): Promise<RestoreResult> {
   const started = Date.now();
   const archive = path.resolve(options.archive);
   if (!existsSync(archive)) throw new RestoreError(`No such archive: ${archive}`);
+  const mariadb = (() => {
+    try {
+      return clientBinary("mariadb");
+    } catch (err) {
+      throw new RestoreError(`${(err as Error).message}; nothing was changed.`);
+    }
+  })();
   const uploadsDir = path.resolve(options.uploadsDir);
-  await mkdir(path.dirname(uploadsDir), { recursive: true });
-  // Staging beside the uploads folder, so files can be renamed into place.
-  const staging = await mkdtemp(path.join(path.dirname(uploadsDir), ".forthright-restore-"));
-  const defaults = await defaultsFileFor(options.databaseUrl);
-  const conn = await mysql.createConnection({ uri: options.databaseUrl });
   const timings = { verifyMs: 0, loadMs: 0, filesMs: 0, checkMs: 0, totalMs: 0 };
+  let staging: string | null = null;
+  let defaults: Awaited<ReturnType<typeof defaultsFileFor>> | null = null;
+  let conn: mysql.Connection | null = null;
+  let locked = false;
+  // Old stored folders moved aside (name -> aside path) and whether the restore got far enough to keep the new ones.
+  const aside = new Map<string, string>();
+  let committed = false;
   try {
+    await mkdir(path.dirname(uploadsDir), { recursive: true });
+    // Staging beside the uploads folder, so files can be renamed into place.
+    staging = await mkdtemp(path.join(path.dirname(uploadsDir), ".forthright-restore-"));
+    defaults = await defaultsFileFor(options.databaseUrl);
+    conn = await mysql.createConnection({ uri: options.databaseUrl });
+    await checkClient(mariadb, defaults.file, defaults.database);
+    const wait = options.lockWaitSeconds ?? 60;
+    const [[lock]] = (await conn.query(`SELECT GET_LOCK(${FILES_LOCK_SQL}, ?) AS got`, [wait])) as unknown as [[{ got: number | null }]];
+    if (!lock?.got) throw new RestoreError(`Could not take the files lock within ${wait} s (an orphan clean-up or a backup holds it; is the server still running?); nothing was changed.`);
+    locked = true;
+
     log(`Checking ${archive}…`);
     const manifest = await unpack(archive, staging);
     await verifyStaged(staging, manifest);
@@ -165,28 +237,41 @@ export async function restore(options: RestoreOptions): Promise<RestoreResult> {
     }
 
     const target = await tablesWithRows(conn);
-    const existingFiles = await filesUnder(uploadsDir);
-    if (!options.force && (target.withRows.length || existingFiles.length)) {
+    const existing = await inspectUploads(uploadsDir);
+    if (existing.unexpected.length) {
+      throw new RestoreError(
+        `Refusing to restore: the uploads folder ${uploadsDir} holds ${existing.unexpected.slice(0, 5).join(", ")}${existing.unexpected.length > 5 ? ", …" : ""}, which the app never stores there (only photos/ and closeups/). Move it elsewhere, or point UPLOADS_DIR at the right folder; --force does not remove it.`,
+      );
+    }
+    if (!options.force && (target.withRows.length || existing.files)) {
       const why = [
         target.withRows.length ? `database ${defaults.database} has rows in ${target.withRows.length} table(s) (${target.withRows.slice(0, 5).join(", ")}${target.withRows.length > 5 ? ", …" : ""})` : null,
-        existingFiles.length ? `the uploads folder ${uploadsDir} holds ${existingFiles.length} file(s)` : null,
+        existing.files ? `the uploads folder ${uploadsDir} holds ${existing.files} file(s)` : null,
       ].filter(Boolean);
       throw new RestoreError(`Refusing to restore over existing data: ${why.join(" and ")}. Restore into an empty database and folder, or pass --force to replace them.`);
     }
+
+    // From here on the target changes. The old stored files go aside first, so a failure can put them back.
+    const id = randomBytes(4).toString("hex");
+    for (const name of STORED) {
+      const to = path.join(uploadsDir, `${ASIDE_PREFIX}${id}-${name}`);
+      try {
+        await rename(path.join(uploadsDir, name), to);
+        aside.set(name, to);
+      } catch (err) {
+        if ((err as NodeJS.ErrnoException).code !== "ENOENT") throw err;
+      }
+    }
+    if (existing.files) log(`  --force: ${existing.files} existing file(s) in ${uploadsDir} moved aside until the restore is checked`);
     // Empty (or, with --force, doomed) tables go, so the target holds exactly what the dump creates.
     await conn.query("SET FOREIGN_KEY_CHECKS = 0");
     for (const name of target.all) await conn.query(`DROP TABLE IF EXISTS ${quoteIdent(name)}`);
     await conn.query("SET FOREIGN_KEY_CHECKS = 1");
-    if (options.force && existingFiles.length) {
-      log(`  --force: removing ${existingFiles.length} existing file(s) from ${uploadsDir}`);
-      for (const top of await readdir(uploadsDir)) await rm(path.join(uploadsDir, top), { recursive: true, force: true });
-    }
 
     const t1 = Date.now();
     log(`Loading the dump into ${defaults.database}…`);
-    await load(clientBinary("mariadb"), defaults.file, defaults.database, path.join(staging, DUMP_NAME));
+    await load(mariadb, defaults.file, defaults.database, path.join(staging, DUMP_NAME));
     timings.loadMs = Date.now() - t1;
-
     const t2 = Date.now();
     let bytes = 0;
     for (const f of manifest.files) {
@@ -237,15 +322,34 @@ export async function restore(options: RestoreOptions): Promise<RestoreResult> {
     timings.checkMs = Date.now() - t3;
     timings.totalMs = Date.now() - started;
     if (problems.length) throw new RestoreError(`The restore finished but does not match the backup:\n  ${problems.join("\n  ")}`);
+    committed = true;
+    for (const dir of aside.values()) await rm(dir, { recursive: true, force: true });
+    aside.clear();
     log(`Restored ${Object.keys(manifest.tables).length} tables (${rows} rows) and ${manifest.files.length} files (${(bytes / 1024 / 1024).toFixed(1)} MiB) into ${defaults.database} and ${uploadsDir}.`);
     log(`  checked: every file's sha256, every table's row count, every referenced file present`);
     log(`  verify ${seconds(timings.verifyMs)}, load ${seconds(timings.loadMs)}, files ${seconds(timings.filesMs)}, checks ${seconds(timings.checkMs)}, total ${seconds(timings.totalMs)}`);
     return { manifest, rows, files: manifest.files.length, bytes, timings };
+  } catch (err) {
+    if (!committed && aside.size) {
+      // Put the old files back: the restored ones (if any got there) go, the moved-aside folders return.
+      try {
+        for (const [name, dir] of aside) {
+          await rm(path.join(uploadsDir, name), { recursive: true, force: true });
+          await rename(dir, path.join(uploadsDir, name));
+        }
+        for (const name of STORED) if (!aside.has(name)) await rm(path.join(uploadsDir, name), { recursive: true, force: true });
+        log(`  the old files in ${uploadsDir} were put back`);
+      } catch (undo) {
+        log(`  warning: could not put the old files back (${(undo as Error).message}); they are in ${[...aside.values()].join(", ")}`);
+      }
+    }
+    throw err;
   } finally {
-    await conn.end().catch(() => undefined);
-    await defaults.remove();
+    if (locked) await conn?.query(`SELECT RELEASE_LOCK(${FILES_LOCK_SQL})`).catch(() => undefined);
+    await conn?.end().catch(() => undefined);
+    await defaults?.remove();
     // Retries: after a failed unpack, tar may still be closing files it had started.
-    await rm(staging, { recursive: true, force: true, maxRetries: 10, retryDelay: 100 });
+    if (staging) await rm(staging, { recursive: true, force: true, maxRetries: 10, retryDelay: 100 });
   }
 }
 

@@ -137,7 +137,8 @@ describe("backup and restore", () => {
         else editedVersion = r.body.vehicle.version;
       }
     })().catch((err: Error) => void failures.push(`editor stopped: ${err.message}`));
-    while (iterations < 2) await new Promise((r) => setTimeout(r, 50));
+    // Two rounds of writes before the backup starts; a writer or editor that fails stops the wait (and the test).
+    while (iterations < 2 && failures.length === 0) await new Promise((r) => setTimeout(r, 50));
 
     const before = [...acked];
     const editedBefore = editedVersion;
@@ -217,6 +218,8 @@ describe("backup and restore", () => {
     const made = await npm(["backup", "--", "--out", archive], { DATABASE_URL: t.ctx.config.DATABASE_URL, UPLOADS_DIR: t.ctx.uploadsDir });
     const backupMs = Date.now() - started;
     expect(made.stdout).toMatch(/Backup written: .*quiet\.tar\.gz/);
+    // It holds password hashes and session ids: the owner's only.
+    expect(statSync(archive).mode & 0o777).toBe(0o600);
     consistentArchive = archive;
 
     const target = freshTarget();
@@ -250,6 +253,52 @@ describe("backup and restore", () => {
     const forced = await restore({ archive: consistentArchive, databaseUrl: full.db.url, uploadsDir: full.uploadsDir, force: true });
     expect(filesOf(full.uploadsDir).size).toBe(forced.files);
     expect(await checksums(full.db.name)).toEqual(await checksums(t.ctx.config.DATABASE_URL.split("/").pop()!));
+  }, 300_000);
+
+  it("when the uploads folder holds only a .gitkeep (a fresh checkout), then restore takes it as empty and keeps the .gitkeep; when it holds anything the app never stores there, restore refuses even with --force and leaves it alone", async () => {
+    const fresh = freshTarget();
+    mkdirSync(fresh.uploadsDir, { recursive: true });
+    writeFileSync(path.join(fresh.uploadsDir, ".gitkeep"), "");
+    const done = await restore({ archive: consistentArchive, databaseUrl: fresh.db.url, uploadsDir: fresh.uploadsDir });
+    expect(readFileSync(path.join(fresh.uploadsDir, ".gitkeep"), "utf8")).toBe("");
+    expect(filesOf(fresh.uploadsDir).size).toBe(done.files + 1);
+
+    const stray = freshTarget();
+    mkdirSync(path.join(stray.uploadsDir, "invoices"), { recursive: true });
+    writeFileSync(path.join(stray.uploadsDir, "invoices", "march.pdf"), "not ours");
+    for (const force of [false, true]) {
+      await expect(restore({ archive: consistentArchive, databaseUrl: stray.db.url, uploadsDir: stray.uploadsDir, force })).rejects.toThrow(
+        /Refusing to restore: the uploads folder .* holds invoices, which the app never stores there .*--force does not remove it/,
+      );
+    }
+    expect(readFileSync(path.join(stray.uploadsDir, "invoices", "march.pdf"), "utf8")).toBe("not ours");
+    const [tables] = await rows<{ n: number }>("SELECT COUNT(*) AS n FROM information_schema.TABLES WHERE TABLE_SCHEMA = ?", [stray.db.name]);
+    expect(Number(tables!.n)).toBe(0);
+  }, 300_000);
+
+  it("when loading the dump fails during a --force restore, then the old uploads are put back exactly as they were", async () => {
+    // A well-formed archive whose dump the client rejects part-way (its manifest hashes the damaged dump, so it verifies).
+    const unpacked = path.join(work, "bad-dump");
+    mkdirSync(unpacked);
+    await tar.extract({ file: consistentArchive, cwd: unpacked });
+    const dumpFile = path.join(unpacked, "database.sql");
+    writeFileSync(dumpFile, readFileSync(dumpFile, "utf8") + "\nTHIS IS NOT SQL;\n");
+    const manifestFile = path.join(unpacked, "manifest.json");
+    const manifest = JSON.parse(readFileSync(manifestFile, "utf8")) as { dump: { sha256: string; bytes: number } };
+    const dump = readFileSync(dumpFile);
+    manifest.dump = { ...manifest.dump, sha256: createHash("sha256").update(dump).digest("hex"), bytes: dump.length };
+    writeFileSync(manifestFile, JSON.stringify(manifest));
+    const badArchive = path.join(work, "bad-dump.tar.gz");
+    await tar.create({ gzip: true, file: badArchive, cwd: unpacked }, ["manifest.json", "database.sql", "uploads"]);
+
+    const target = freshTarget();
+    await restore({ archive: path.join(work, "during-writes.tar.gz"), databaseUrl: target.db.url, uploadsDir: target.uploadsDir });
+    const before = filesOf(target.uploadsDir);
+    expect(before.size).toBeGreaterThan(0);
+    await expect(restore({ archive: badArchive, databaseUrl: target.db.url, uploadsDir: target.uploadsDir, force: true })).rejects.toThrow(/Loading the dump failed/);
+    expect(filesOf(target.uploadsDir)).toEqual(before);
+    // Nothing moved aside is left behind.
+    expect(readdirSync(target.uploadsDir).filter((name) => name.startsWith("."))).toEqual([]);
   }, 300_000);
 
   it("when the archive is truncated or corrupt, then restore refuses with a clear message and leaves the target untouched", async () => {
