@@ -276,6 +276,24 @@ describe("backup and restore", () => {
     expect(Number(tables!.n)).toBe(0);
   }, 300_000);
 
+  it("when something holds the target's files lock (a clean-up pass or a backup of it), then restore waits for it, and gives up without changing anything", async () => {
+    const target = freshTarget();
+    const holder = await t.ctx.database.pool.getConnection();
+    try {
+      // The same name the backup and the orphan clean-up use: CONCAT(DATABASE(), ':files') on the target.
+      const [[got]] = (await holder.query("SELECT GET_LOCK(?, 0) AS got", [`${target.db.name}:files`])) as unknown as [[{ got: number }]];
+      expect(got.got).toBe(1);
+      await expect(restore({ archive: consistentArchive, databaseUrl: target.db.url, uploadsDir: target.uploadsDir, lockWaitSeconds: 1 })).rejects.toThrow(
+        /Could not take the files lock within 1 s .*nothing was changed/,
+      );
+    } finally {
+      await holder.query("SELECT RELEASE_LOCK(?)", [`${target.db.name}:files`]);
+      holder.release();
+    }
+    expect(() => readdirSync(target.uploadsDir)).toThrow();
+    await restore({ archive: consistentArchive, databaseUrl: target.db.url, uploadsDir: target.uploadsDir, lockWaitSeconds: 1 });
+  }, 300_000);
+
   it("when loading the dump fails during a --force restore, then the old uploads are put back exactly as they were", async () => {
     // A well-formed archive whose dump the client rejects part-way (its manifest hashes the damaged dump, so it verifies).
     const unpacked = path.join(work, "bad-dump");
