@@ -28,6 +28,8 @@ import { callerFor, ROUTE_POLICY, type Caller } from "../support/route-policy.ts
 import { changedTables, tableChecksums } from "../support/db-state.ts";
 import { dieselSuv } from "../support/vehicles.ts";
 import { READY_TYRES } from "../support/publishing.ts";
+import { dayIn } from "../../server/lib/clock.ts";
+import { DEMO_DEALERSHIP } from "../../server/db/seed/demo.ts";
 
 type Agent = ReturnType<typeof request.agent>;
 type Json = Record<string, unknown>;
@@ -448,7 +450,7 @@ describe("fuzzing every route", () => {
     });
     // Valid bodies to start from where cross-field rules make a random draw unlikely to pass (make with model, VIN
     // check digit, odometer pairs, four tyres, columns for the format): a subset of fields is replaced by edge values.
-    const today = new Date().toISOString().slice(0, 10);
+    const today = dayIn(DEMO_DEALERSHIP.timeZone, new Date());
     const BASES: Record<string, () => Json> = {
       "POST /api/vehicles": () => dieselSuv(),
       "PATCH /api/vehicles/:id": () => ({ ...dieselSuv(), version: 1 }),

@@ -18,6 +18,7 @@ import { dieselSuv } from "../support/vehicles.ts";
 import { renderDemoPhoto, type Angle } from "../../server/db/seed/art/index.ts";
 import { computeCheckDigit } from "../../shared/domain/vin.ts";
 import { ZONES } from "../../shared/constants/evidence.ts";
+import { MIN_FILL_MS } from "../../shared/constants/leads.ts";
 
 const world = e2eWorld();
 let mail: Awaited<ReturnType<typeof catchMail>>;
@@ -325,7 +326,7 @@ describe("journeys, one per role", () => {
     await form.getByLabel("E-mail", { exact: true }).fill(BUYER.email);
     await form.getByLabel("Your question").fill("Is the tow bar rated for a 2-tonne caravan? Could I see it on Saturday?");
     await form.getByLabel(/You may contact me about this vehicle/).check();
-    await page.waitForTimeout(3200); // a person takes longer than the form's minimum fill time; so does this test
+    await page.waitForTimeout(MIN_FILL_MS + 200); // a person takes longer than the form's minimum fill time; so does this test
     await b.shot("enquiry-filled", form);
     await form.getByRole("button", { name: "Send my question" }).tap();
     await expect.poll(() => page.getByText(/Your question is with us/).count()).toBe(1);

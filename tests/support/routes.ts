@@ -23,6 +23,8 @@ import { createVehicleSchema, updateVehicleSchema } from "../../shared/schemas/v
 import { tyresSchema } from "../../shared/schemas/evidence.ts";
 import { feedQuerySchema } from "../../shared/schemas/feeds.ts";
 import { photoUpload } from "../../server/middleware/upload.ts";
+import { dayIn } from "../../server/lib/clock.ts";
+import { DEMO_DEALERSHIP } from "../../server/db/seed/demo.ts";
 
 export type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 export const STATE_CHANGING: ReadonlySet<Method> = new Set(["POST", "PUT", "PATCH", "DELETE"]);
@@ -44,7 +46,8 @@ export interface RouteEntry {
 }
 
 /** Schemas a handler builds per request (they need the dealership's calendar day) or parses inline. */
-const today = () => new Date().toISOString().slice(0, 10);
+// The server parses with the dealership's calendar day (server/lib/clock.ts), not UTC's: the demo's is ten hours ahead.
+const today = () => dayIn(DEMO_DEALERSHIP.timeZone, new Date());
 export const INLINE_SCHEMAS: Record<string, Partial<Record<Part, () => z.ZodType>>> = {
   "POST /api/vehicles": { body: () => createVehicleSchema(today()) },
   "PATCH /api/vehicles/:id": { body: () => updateVehicleSchema(today()) },

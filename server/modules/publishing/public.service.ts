@@ -169,11 +169,11 @@ export function publicCacheOf(ctx: AppContext): PublicCache {
  * A public response made from the vehicle's revisions, cached by what it depends on: revisions never change, so
  * (vehicle, revision asked for, current revision, status) fixes the bytes; the slug → those lookup runs every time.
  */
-export async function publicRepresentation(ctx: AppContext, kind: string, slug: string, number: number | undefined, render: (v: PublicVehicle) => Representation): Promise<Representation> {
+export async function publicRepresentation(ctx: AppContext, kind: string, slug: string, number: number | undefined, render: (v: PublicVehicle) => Promise<Representation>): Promise<Representation> {
   const v = await locate(ctx, slug);
   const key = `${kind}|${slug}|${v.id}|${number ?? "current"}|${v.currentRevisionId}|${v.status}`;
   return publicCacheOf(ctx).get(key, async () => {
-    const rep = render(await readPublic(ctx, slug, v, number));
+    const rep = await render(await readPublic(ctx, slug, v, number));
     return { value: rep, size: rep.size + key.length };
   });
 }

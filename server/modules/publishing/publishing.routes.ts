@@ -37,7 +37,8 @@ export function publicVehiclesRoutes(ctx: AppContext): Router {
   router.get("/:slug/revisions/:number", validate("params", slugParams.extend({ number: z.coerce.number().int().positive() })), async (req, res) => {
     const { slug, number } = res.locals.params as { slug: string; number: number };
     // An older revision never changes, so it may be cached for long.
-    sendRepresentation(req, res, await publicVehicleJson(ctx, slug, number), "public, max-age=86400");
+    // Short-lived: the body carries the vehicle's status (withdrawn → 410), and the strong ETag makes revalidation cheap.
+    sendRepresentation(req, res, await publicVehicleJson(ctx, slug, number), "public, max-age=30");
   });
   router.get("/:slug/qr.svg", validate("params", slugParams), async (_req, res) => {
     const { slug } = res.locals.params as { slug: string };

@@ -104,6 +104,8 @@ function PrintPage({ url, revision, published }: { url: string; revision: number
   const left = cssString(`${shortUrl(url)} · revision ${revision}, published ${published}`);
   // A constructed stylesheet rather than a <style> element, so the CSP needs no 'unsafe-inline' for styles.
   useEffect(() => {
+    // Constructed stylesheets arrived in Safari 16.4; older browsers print without the footer rather than fail.
+    if (typeof CSSStyleSheet === "undefined" || !("adoptedStyleSheets" in document) || !("replaceSync" in CSSStyleSheet.prototype)) return;
     const sheet = new CSSStyleSheet();
     sheet.replaceSync(`@page report { @bottom-left { content: ${left}; } @bottom-right { content: "Page " counter(page) " of " counter(pages); } }`);
     document.adoptedStyleSheets = [...document.adoptedStyleSheets, sheet];
