@@ -31,7 +31,8 @@ import { seedDemo } from "../../server/db/seed/demo.ts";
 import { localStorage } from "../../server/lib/storage.ts";
 import { makeVariants, prepareMaster } from "../../server/modules/photos/photo-pipeline.ts";
 import { listen } from "../support/http-server.ts";
-import { percentile, seededRandom } from "./stats.ts";
+import { percentile } from "./stats.ts";
+import { seededRandom } from "../support/random.ts";
 import type { BenchEnv, BenchResult } from "./types.ts";
 
 export const name = "photos";

@@ -8,18 +8,6 @@ export function percentile(samples: readonly number[], p: number): number {
   return sorted[rank - 1]!;
 }
 
-/** A seeded PRNG (mulberry32) returning floats in [0, 1), so generated data and query mixes repeat run to run. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 export type Rng = () => number;
 
 export const intBetween = (rng: Rng, min: number, max: number) => min + Math.floor(rng() * (max - min + 1));

@@ -19,7 +19,8 @@ import { vehicleListQuerySchema, type VehicleListQuery } from "../../shared/sche
 import type { VehicleStatus } from "../../shared/constants/vehicle.ts";
 import type { FuelType } from "../../shared/domain/fuel.ts";
 import { listen } from "../support/http-server.ts";
-import { gaussian, intBetween, percentile, pickOne, pickWeighted, seededRandom, type Rng } from "./stats.ts";
+import { gaussian, intBetween, percentile, pickOne, pickWeighted, type Rng } from "./stats.ts";
+import { seededRandom } from "../support/random.ts";
 import type { BenchEnv, BenchResult } from "./types.ts";
 
 export const name = "stock-list";
