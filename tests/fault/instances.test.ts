@@ -4,7 +4,8 @@ import path from "node:path";
 import { inArray } from "drizzle-orm";
 import { photos } from "../../server/db/schema/index.ts";
 import { defaultLimits } from "../../server/middleware/rate-limit.ts";
-import { Client, photoForm, serverWorld, type ServerProcess, type ServerWorld } from "../support/server-process.ts";
+import { createServer } from "node:http";
+import { Client, photoForm, releasePort, reservedPort, serverWorld, type ServerProcess, type ServerWorld } from "../support/server-process.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
 import { dieselSuv } from "../support/vehicles.ts";
 import { landscapeJpeg } from "../support/images.ts";
@@ -45,6 +46,22 @@ async function untilReady(client: Client, vehicleId: number, count: number) {
 }
 
 const urlsOf = (srcset: string) => srcset.split(", ").filter(Boolean).map((s) => s.split(" ")[0]!);
+
+describe("a server process knows its own port", () => {
+  it("when another process already answers /api/health on the port, then start() refuses instead of trusting that answer", async () => {
+    const port = await reservedPort();
+    const other = createServer((_req, res) => res.writeHead(200, { "content-type": "application/json" }).end('{"ok":true}'));
+    await new Promise<void>((resolve) => other.listen(port, "127.0.0.1", resolve));
+    try {
+      const server = await world.server({ port });
+      await expect(server.start(60_000)).rejects.toThrow(/exited before it answered .*another process answered on port/);
+      expect(server.log()).toMatch(/EADDRINUSE/);
+    } finally {
+      await new Promise((resolve) => other.close(resolve));
+      releasePort(port);
+    }
+  });
+});
 
 describe("two instances on one database and one uploads folder", () => {
   it("when a session is made on A, then the same cookie works on B; when it signs out on A, then B refuses it", async () => {

@@ -24,6 +24,21 @@ export interface TestApp {
   close: () => Promise<void>;
 }
 
+/** Supertest agents on an in-process app: one that sends our Origin header, and one signed in as a demo staff role. */
+export function agentsFor(app: Express): Pick<TestApp, "agent" | "signIn"> {
+  const agent = () => request.agent(app).set("Origin", ORIGIN);
+  return {
+    agent,
+    async signIn(role: Role) {
+      const a = agent();
+      const email = DEMO_USERS.find((u) => u.role === role)!.email;
+      const res = await a.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD });
+      if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
+      return a;
+    },
+  };
+}
+
 const lots = { points: 1000, durationSeconds: 900 };
 const generous: LimitSettings = {
   signInPerAddress: lots,
@@ -46,18 +61,10 @@ export async function startTestApp(options: { limits?: LimitSettings; seed?: boo
   });
   if (options.seed !== false) await seedDemo(ctx.database.db, { password: DEMO_PASSWORD });
   const app = createApp(ctx);
-  const agent = () => request.agent(app).set("Origin", ORIGIN);
   return {
     app,
     ctx,
-    agent,
-    async signIn(role: Role) {
-      const a = agent();
-      const email = DEMO_USERS.find((u) => u.role === role)!.email;
-      const res = await a.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD });
-      if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
-      return a;
-    },
+    ...agentsFor(app),
     async close() {
       await ctx.photoWorker.stop();
       await ctx.database.close();

@@ -1,21 +1,145 @@
 import { spawn, type ChildProcess } from "node:child_process";
-import { mkdtempSync, rmSync } from "node:fs";
+import { createServer } from "node:net";
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, readlinkSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import request from "supertest";
 import { pino } from "pino";
 import { createApp } from "../../server/app.ts";
 import { createContext } from "../../server/lib/boot.ts";
 import { seedDemo, DEMO_USERS } from "../../server/db/seed/demo.ts";
 import type { Role } from "../../shared/constants/roles.ts";
-import { DEMO_PASSWORD, ORIGIN, type TestApp } from "./app.ts";
+import { agentsFor, DEMO_PASSWORD, ORIGIN, type TestApp } from "./app.ts";
 import { createTestDatabase } from "./database.ts";
 import { SESSION_COOKIE } from "../../server/modules/auth/lucia.ts";
-import { freePort } from "./ports.ts";
 
 const ROOT = fileURLToPath(new URL("../..", import.meta.url));
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+/*
+ * Ports for server processes. freePort() (an ephemeral port the OS picks, then closes) is not safe here: the child binds
+ * it a moment later, and again at every crash-test restart, and meanwhile the OS may hand the same port to any other
+ * socket — a supertest listener in another test file, for instance, which also answers /api/health with 200, so start()
+ * would "succeed" against another process and another database. Two things together make that impossible:
+ *  1. reservedPort() picks below the kernel's ephemeral range (/proc/sys/net/ipv4/ip_local_port_range, 32768 on this
+ *     machine), in 20000–32000, so no listen(0) or outgoing connection is ever given it; and it claims the port with a
+ *     lock file (created exclusively, holding our pid) so two test processes using this helper never pick the same one.
+ *     The claim is held until the world closes (or releasePort()), so a server keeps its port across restarts.
+ *  2. start() counts /api/health only once the listening socket on the port belongs to the child itself (its inode in
+ *     /proc/net/tcp is among the child's file descriptors). Anything else on the port is ignored; the child then fails
+ *     to bind and exits, and start() reports that with its output.
+ */
+const PORT_LOCKS = path.join(tmpdir(), "forthright-test-ports");
+const claimed = new Set<number>();
+process.once("exit", () => {
+  for (const port of claimed) rmSync(path.join(PORT_LOCKS, String(port)), { force: true });
+});
+
+function ephemeralStart() {
+  try {
+    return Number(readFileSync("/proc/sys/net/ipv4/ip_local_port_range", "utf8").trim().split(/\s+/)[0]) || 32768;
+  } catch {
+    return 32768; // Linux's default start of the range
+  }
+}
+
+const alive = (pid: number) => {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code === "EPERM";
+  }
+};
+
+function claim(port: number, retry = true): boolean {
+  const file = path.join(PORT_LOCKS, String(port));
+  try {
+    writeFileSync(file, String(process.pid), { flag: "wx" });
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== "EEXIST") throw err;
+    // Left by a test process that ended without releasing (vitest's workers are stopped without an "exit" event)?
+    // Take it over. Two processes doing so at once for the same port is the one gap; start()'s check still catches it.
+    let owner = 0;
+    try {
+      owner = Number(readFileSync(file, "utf8"));
+    } catch {
+      // removed meanwhile
+    }
+    if (!retry || (owner && alive(owner))) return false;
+    rmSync(file, { force: true });
+    return claim(port, false);
+  }
+  claimed.add(port);
+  return true;
+}
+
+/** Gives back a port from reservedPort() (a world gives back its own when it closes). */
+export function releasePort(port: number) {
+  if (claimed.delete(port)) rmSync(path.join(PORT_LOCKS, String(port)), { force: true });
+}
+
+const canBind = (port: number) =>
+  new Promise<boolean>((resolve) => {
+    const probe = createServer();
+    probe.unref();
+    probe.once("error", () => resolve(false));
+    probe.listen(port, "127.0.0.1", () => probe.close(() => resolve(true)));
+  });
+
+/** A loopback port below the ephemeral range, free now and claimed for this process until release (see above). */
+export async function reservedPort(): Promise<number> {
+  mkdirSync(PORT_LOCKS, { recursive: true });
+  const low = 20_000;
+  const high = Math.min(32_000, ephemeralStart() - 1);
+  for (let attempt = 0; attempt < 500; attempt++) {
+    const port = low + Math.floor(Math.random() * (high - low + 1));
+    if (!claim(port)) continue;
+    if (await canBind(port)) return port;
+    releasePort(port);
+  }
+  throw new Error(`no free port between ${low} and ${high}`);
+}
+
+/**
+ * Whether process `pid` holds the listening TCP socket on `port`: the socket's inode from /proc/net/tcp(6), looked for
+ * among /proc/<pid>/fd. Undefined where /proc cannot tell (not Linux); then start() trusts the answer as before.
+ */
+function listensOn(pid: number, port: number): boolean | undefined {
+  const inodes = new Set<string>();
+  let readable = false;
+  for (const table of ["/proc/net/tcp", "/proc/net/tcp6"]) {
+    let text: string;
+    try {
+      text = readFileSync(table, "utf8");
+    } catch {
+      continue;
+    }
+    readable = true;
+    for (const line of text.split("\n").slice(1)) {
+      // sl local_address rem_address st tx:rx tr:when retrnsmt uid timeout inode
+      const f = line.trim().split(/\s+/);
+      if (f.length > 9 && f[3] === "0A" && parseInt(f[1]!.split(":")[1]!, 16) === port) inodes.add(f[9]!);
+    }
+  }
+  if (!readable) return undefined;
+  if (!inodes.size) return false;
+  let fds: string[];
+  try {
+    fds = readdirSync(`/proc/${pid}/fd`);
+  } catch {
+    return false;
+  }
+  for (const fd of fds) {
+    try {
+      const socket = /^socket:\[(\d+)\]$/.exec(readlinkSync(`/proc/${pid}/fd/${fd}`));
+      if (socket && inodes.has(socket[1]!)) return true;
+    } catch {
+      // the descriptor closed meanwhile
+    }
+  }
+  return false;
+}
 
 /**
  * The real server (`node --import tsx server/index.ts`) as a child process, so a test can SIGKILL it in the middle
@@ -45,7 +169,10 @@ export class ServerProcess {
     return this.lines.slice(-last).join("\n");
   }
 
-  /** Spawns the process; resolves once /api/health answers 200, rejects (with the output) if it exits first. */
+  /**
+   * Spawns the process; resolves once /api/health answers 200 on a socket the child itself listens on (see reservedPort),
+   * rejects (with the output) if it exits first.
+   */
   async start(timeoutMs = 90_000): Promise<void> {
     if (this.child) throw new Error("server already running");
     const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], { cwd: ROOT, env: this.env, stdio: ["ignore", "pipe", "pipe"] });
@@ -69,12 +196,17 @@ export class ServerProcess {
     );
     const deadline = Date.now() + timeoutMs;
     let gone = false;
+    let impostor = false;
     void this.exited.then(() => (gone = true));
     while (Date.now() < deadline) {
-      if (gone) throw new Error(`the server exited before it answered /api/health:\n${this.log()}`);
+      const other = impostor ? ` (meanwhile another process answered on port ${this.port})` : "";
+      if (gone) throw new Error(`the server exited before it answered /api/health${other}:\n${this.log()}`);
       try {
         const res = await fetch(`${this.url}/api/health`, { signal: AbortSignal.timeout(2000) });
-        if (res.status === 200) return;
+        if (res.status === 200) {
+          if (!gone && listensOn(child.pid!, this.port) !== false) return;
+          impostor = true;
+        }
       } catch {
         // not listening yet
       }
@@ -133,50 +265,45 @@ export async function serverWorld(): Promise<ServerWorld> {
   });
   await seedDemo(ctx.database.db, { password: DEMO_PASSWORD });
   const app = createApp(ctx);
-  const agent = () => request.agent(app).set("Origin", ORIGIN);
   const servers: ServerProcess[] = [];
-  const t: TestApp = {
-    app,
-    ctx,
-    agent,
-    async signIn(role: Role) {
-      const a = agent();
-      const email = DEMO_USERS.find((u) => u.role === role)!.email;
-      const res = await a.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD });
-      if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
-      return a;
-    },
-    close: async () => undefined,
+  const ports: number[] = [];
+  const t: TestApp = { app, ctx, ...agentsFor(app), close: async () => undefined };
+  const port = async () => {
+    const p = await reservedPort();
+    ports.push(p);
+    return p;
   };
   return {
     databaseUrl: database.url,
     uploadsDir,
     app: t,
     async server(options = {}) {
-      const port = options.port ?? (await freePort());
+      // Claimed for the whole world, so the server keeps it across restarts (see reservedPort).
+      const serverPort = options.port ?? (await port());
       const env: NodeJS.ProcessEnv = {
         ...process.env,
         NODE_ENV: "test",
         HOST: "127.0.0.1",
-        PORT: String(port),
-        PUBLIC_URL: `http://127.0.0.1:${port}`,
+        PORT: String(serverPort),
+        PUBLIC_URL: `http://127.0.0.1:${serverPort}`,
         DATABASE_URL: database.url,
         UPLOADS_DIR: uploadsDir,
         LOG_LEVEL: "warn",
         // Each process its own demo mail catcher, so instances never fight over a port.
-        FAKE_SMTP_PORT: String(await freePort()),
+        FAKE_SMTP_PORT: String(await port()),
         SMTP_HOST: "",
         // sharp's memory is glibc's arenas; keep the children small on a shared machine (see DEVELOPERS.md).
         MALLOC_ARENA_MAX: "2",
         ...options.env,
       };
       for (const k of Object.keys(env)) if (env[k] === "") delete env[k];
-      const server = new ServerProcess(port, env);
+      const server = new ServerProcess(serverPort, env);
       servers.push(server);
       return server;
     },
     async close() {
       for (const s of servers) await s.kill("SIGKILL");
+      for (const p of ports) releasePort(p);
       await ctx.photoWorker.stop();
       await ctx.mail.stop();
       await ctx.database.close();
