@@ -22,7 +22,7 @@
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
-import { createServer, request as httpRequest, type IncomingHttpHeaders, type Server } from "node:http";
+import { createServer, type IncomingHttpHeaders, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { cpus, loadavg, tmpdir } from "node:os";
 import path from "node:path";
@@ -44,6 +44,7 @@ import { publishReadyVehicle } from "../support/publishing.ts";
 import { dieselSuv } from "../support/vehicles.ts";
 import { percentile } from "./stats.ts";
 import type { BenchEnv, BenchResult } from "./types.ts";
+import { rawGet } from "./http.ts";
 
 export const name = "load";
 
@@ -73,18 +74,6 @@ const generous: LimitSettings = {
 // ---------------------------------------------------------------------------------------------------------------
 // Process and HTTP helpers.
 
-function rawGet(url: string, headers: Record<string, string>): Promise<{ status: number; headers: IncomingHttpHeaders; body: Buffer }> {
-  return new Promise((resolve, reject) => {
-    const req = httpRequest(url, { headers }, (res) => {
-      const chunks: Buffer[] = [];
-      res.on("data", (c: Buffer) => chunks.push(c));
-      res.on("end", () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
-      res.on("error", reject);
-    });
-    req.on("error", reject);
-    req.end();
-  });
-}
 
 function closeServer(server: Server | undefined): Promise<void> {
   if (!server?.listening) return Promise.resolve();

@@ -21,7 +21,7 @@
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
-import { createServer, request as httpRequest, type IncomingHttpHeaders, type Server } from "node:http";
+import { createServer, type IncomingHttpHeaders, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { cpus, loadavg, tmpdir } from "node:os";
 import path from "node:path";
@@ -42,6 +42,7 @@ import type { TestApp } from "../support/app.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
 import { percentile } from "./stats.ts";
 import type { BenchEnv, BenchResult } from "./types.ts";
+import { rawGet } from "./http.ts";
 
 export const name = "public";
 
@@ -116,19 +117,6 @@ function runNode(args: string[], timeoutMs: number, children: Set<ChildProcess>)
   });
 }
 
-/** One raw GET, so the response's own headers (content-encoding above all) are seen as sent. */
-function rawGet(url: string, headers: Record<string, string>): Promise<{ status: number; headers: IncomingHttpHeaders; body: Buffer }> {
-  return new Promise((resolve, reject) => {
-    const req = httpRequest(url, { headers }, (res) => {
-      const chunks: Buffer[] = [];
-      res.on("data", (c: Buffer) => chunks.push(c));
-      res.on("end", () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
-      res.on("error", reject);
-    });
-    req.on("error", reject);
-    req.end();
-  });
-}
 
 /** CPU time (ms) a process has used, from /proc (Linux); undefined where that cannot be read. */
 function procCpuMs(pid: number): number | undefined {
