@@ -1,11 +1,5 @@
-/** A seeded PRNG (mulberry32) returning floats in [0, 1), so generated data, query mixes and kill times repeat run to run. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/**
+ * The project's one seeded PRNG (mulberry32, the demo's drawings use it too), returning floats in [0, 1), so generated
+ * data, query mixes and kill times repeat run to run.
+ */
+export { rng as seededRandom } from "../../server/db/seed/art/palette.ts";
