@@ -138,6 +138,11 @@ async function locate(ctx: AppContext, slug: string): Promise<Located> {
   return { id: v.id, status: v.status as PublicStatus, currentRevisionId: v.currentRevisionId };
 }
 
+/** Whether the address may be shown to the public at all (404 / 410 otherwise), with no revision read. */
+export async function assertPublic(ctx: AppContext, slug: string): Promise<void> {
+  await locate(ctx, slug);
+}
+
 /** Everything the public sees of a located vehicle: its current (or numbered) revision and the list of revisions. */
 async function readPublic(ctx: AppContext, slug: string, v: Located, number?: number): Promise<PublicVehicle> {
   const { db } = ctx.database;

@@ -7,7 +7,7 @@ import { validate } from "../../middleware/validate.ts";
 import { publishSchema, type PublishBody } from "../../../shared/schemas/publishing.ts";
 import { publicListQuerySchema, type PublicListQuery } from "../../../shared/schemas/public-query.ts";
 import { publish } from "./publishing.service.ts";
-import { getPublic, listPublic, publicVehicleJson, urlFor } from "./public.service.ts";
+import { assertPublic, listPublic, publicVehicleJson, urlFor } from "./public.service.ts";
 import { sendRepresentation } from "./public-cache.ts";
 
 const vehicleParams = z.object({ id: z.coerce.number().int().positive() });
@@ -36,13 +36,12 @@ export function publicVehiclesRoutes(ctx: AppContext): Router {
   });
   router.get("/:slug/revisions/:number", validate("params", slugParams.extend({ number: z.coerce.number().int().positive() })), async (req, res) => {
     const { slug, number } = res.locals.params as { slug: string; number: number };
-    // An older revision never changes, so it may be cached for long.
     // Short-lived: the body carries the vehicle's status (withdrawn → 410), and the strong ETag makes revalidation cheap.
     sendRepresentation(req, res, await publicVehicleJson(ctx, slug, number), "public, max-age=30");
   });
   router.get("/:slug/qr.svg", validate("params", slugParams), async (_req, res) => {
     const { slug } = res.locals.params as { slug: string };
-    await getPublic(ctx, slug);
+    await assertPublic(ctx, slug); // 404 never published, 410 withdrawn; the code needs no revision read
     const svg = await QRCode.toString(urlFor(ctx, slug), { type: "svg", errorCorrectionLevel: "M", margin: 2, color: { dark: "#18212c", light: "#ffffff" } });
     res.type("image/svg+xml").setHeader("Cache-Control", "public, max-age=3600");
     res.send(svg);
