@@ -6,6 +6,8 @@ import { randomUUID } from "node:crypto";
 import type { AppContext } from "./lib/context.ts";
 import { loadSession } from "./middleware/authenticate.ts";
 import { originCheck } from "./middleware/origin-check.ts";
+import { dealershipDay } from "./middleware/route.ts";
+import { getDealership, todayFor } from "./modules/dealerships/dealerships.service.ts";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.ts";
 import { healthRoutes } from "./modules/health/health.routes.ts";
 import { authRoutes } from "./modules/auth/auth.routes.ts";
@@ -80,6 +82,10 @@ export function createApp(ctx: AppContext): Express {
   api.use(express.json({ limit: "512kb" }));
   api.use(loadSession(ctx.auth));
   api.use(originCheck([ctx.config.publicUrl]));
+  api.use(dealershipDay(async (user) => {
+    const dealership = await getDealership(ctx.database.db, user.dealershipId);
+    return { dealership, today: todayFor(ctx, dealership) };
+  }));
   api.use("/health", healthRoutes(ctx));
   api.use("/auth", authRoutes(ctx));
   api.use("/users", usersRoutes(ctx));

@@ -1,9 +1,14 @@
-/** The calendar day at an instant in a time zone, as YYYY-MM-DD (the dealership's "today"). */
-export function dayIn(timeZone: string, at: Date): string {
-  const parts = new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).formatToParts(at);
-  const get = (t: string) => parts.find((p) => p.type === t)!.value;
-  return `${get("year")}-${get("month")}-${get("day")}`;
-}
+import type { Dealership } from "../db/schema/index.ts";
+import { dealershipDay } from "../../shared/domain/calendar.ts";
+
+/** The calendar day at an instant in a time zone, as YYYY-MM-DD: shared/domain/calendar.ts's `dealershipDay`. */
+export const dayIn = (timeZone: string, at: Date): string => dealershipDay(timeZone, at);
 
 export const DAY_MS = 86_400_000;
 export const wholeDaysBetween = (from: Date, to: Date) => Math.max(0, Math.floor((to.getTime() - from.getTime()) / DAY_MS));
+
+/** The dealership of the signed-in user and its calendar day ("YYYY-MM-DD"), read once per request (middleware/route.ts). */
+export interface DealershipDay {
+  dealership: Dealership;
+  today: string;
+}

@@ -19,7 +19,8 @@ export type Part = "body" | "query" | "params";
 /** What a validator checks, kept on the middleware so the route inventory (tests/support/routes.ts) can read it. */
 export interface ValidatorInfo {
   part: Part;
-  schema: z.ZodType;
+  /** The schema, or a function of the dealership's calendar day that builds it (server/middleware/route.ts). */
+  schema: z.ZodType | ((today: string) => z.ZodType);
 }
 
 /**
@@ -42,6 +43,11 @@ export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHan
     res.locals[part] = parseOr400(schema, req[part] ?? {}, part === "body" ? "form" : part);
     next();
   };
+  return tagValidator(middleware, part, schema);
+}
+
+/** Keeps what a validating middleware checks on it, for `validatorInfo()`. */
+export function tagValidator(middleware: RequestHandler, part: Part, schema: ValidatorInfo["schema"]): RequestHandler {
   Object.defineProperty(middleware, VALIDATES, { value: { part, schema } satisfies ValidatorInfo, enumerable: false });
   return middleware;
 }

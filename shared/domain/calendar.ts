@@ -74,3 +74,13 @@ export function monthsBetween(start: CalendarDate, end: CalendarDate): number {
 export function wholeYearsBetween(start: CalendarDate, end: CalendarDate): number {
   return Math.floor(monthsBetween(start, end) / 12);
 }
+
+/**
+ * The calendar day at an instant in the dealership's time zone, as YYYY-MM-DD: the one "today" of the product, used by
+ * the server (validation, derived figures) and by the client's live checks, so both judge a date against the same day.
+ */
+export function dealershipDay(timeZone: string, at: Date = new Date()): string {
+  const parts = new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).formatToParts(at);
+  const get = (t: string) => parts.find((p) => p.type === t)!.value;
+  return `${get("year")}-${get("month")}-${get("day")}`;
+}

@@ -17,3 +17,6 @@ export const versionSchema = z.number({ error: "The record's version is missing.
 
 export const idParamSchema = z.object({ id: z.string().min(1).max(255) });
 export const numericIdParamSchema = z.object({ id: z.coerce.number().int().positive() });
+
+/** `:id` of a vehicle (and of any record with a numeric id) in a path. */
+export const vehicleIdParams = numericIdParamSchema;

@@ -161,3 +161,6 @@ export const statusMoveSchema = z.strictObject({
 export type StatusMoveInput = z.infer<typeof statusMoveSchema>;
 
 export { VEHICLE_STATUSES };
+
+/** GET /api/vehicles/suggestions: features and makes starting with `q`, for the editor's pickers. */
+export const vehicleSuggestionsQuerySchema = z.strictObject({ q: z.string().max(40).default("") });

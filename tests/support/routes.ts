@@ -19,7 +19,7 @@
 import type { Express } from "express";
 import type { z } from "zod";
 import { validatorInfo, type Part } from "../../server/middleware/validate.ts";
-import { createVehicleSchema, updateVehicleSchema } from "../../shared/schemas/vehicles.ts";
+import { guardInfo, type Allow } from "../../server/middleware/route.ts";
 import { tyresSchema } from "../../shared/schemas/evidence.ts";
 import { feedQuerySchema } from "../../shared/schemas/feeds.ts";
 import { photoUpload } from "../../server/middleware/upload.ts";
@@ -43,14 +43,14 @@ export interface RouteEntry {
   schemaSource: Partial<Record<Part, "validate" | "inline">>;
   /** The route takes multipart photo uploads (the multer middleware of server/middleware/upload.ts) rather than JSON. */
   multipart: boolean;
+  /** The action its guard checks (server/middleware/route.ts), from the route's own stack or a router-wide guard. */
+  allow: Allow | undefined;
 }
 
 /** Schemas a handler builds per request (they need the dealership's calendar day) or parses inline. */
 // The server parses with the dealership's calendar day (server/lib/clock.ts), not UTC's: the demo's is ten hours ahead.
 const today = () => dayIn(DEMO_DEALERSHIP.timeZone, new Date());
 export const INLINE_SCHEMAS: Record<string, Partial<Record<Part, () => z.ZodType>>> = {
-  "POST /api/vehicles": { body: () => createVehicleSchema(today()) },
-  "PATCH /api/vehicles/:id": { body: () => updateVehicleSchema(today()) },
   "PUT /api/vehicles/:id/tyres": { body: () => tyresSchema(today()) },
   "GET /feeds/:file": { query: () => feedQuerySchema },
 };
@@ -103,8 +103,15 @@ function verifyAgainstMatchers(layer: LayerLike, paths: string[], where: string)
   });
 }
 
-function walk(stack: LayerLike[], prefix: string, out: RouteEntry[]) {
+function walk(stack: LayerLike[], prefix: string, out: RouteEntry[], outer?: Allow) {
+  // A guard mounted with router.use(allow(...)) covers the routes after it in the same router.
+  let guarded = outer;
   for (const layer of stack) {
+    if (!layer.route && !Array.isArray(layer.handle.stack)) {
+      const g = guardInfo(layer.handle);
+      if (g) guarded = g;
+      continue;
+    }
     if (layer.route) {
       const paths = asPaths(layer.rawPath ?? layer.route.path, prefix);
       verifyAgainstMatchers(layer, paths, prefix);
@@ -115,18 +122,21 @@ function walk(stack: LayerLike[], prefix: string, out: RouteEntry[]) {
       const schemas: RouteEntry["schemas"] = {};
       const schemaSource: RouteEntry["schemaSource"] = {};
       let multipart = false;
+      let allow = guarded;
       for (const h of layer.route.stack) {
         const info = validatorInfo(h.handle);
         if (info) {
-          schemas[info.part] = info.schema;
+          schemas[info.part] = typeof info.schema === "function" ? info.schema(today()) : info.schema;
           schemaSource[info.part] = "validate";
         }
         if (h.handle === photoUpload) multipart = true;
+        const guard = guardInfo(h.handle);
+        if (guard) allow = guard;
       }
       for (const p of paths) {
         const path = joinPath(prefix, p);
         for (const method of methods) {
-          out.push({ method, path, key: `${method} ${path}`, params: paramNames(path), schemas: { ...schemas }, schemaSource: { ...schemaSource }, multipart });
+          out.push({ method, path, key: `${method} ${path}`, params: paramNames(path), schemas: { ...schemas }, schemaSource: { ...schemaSource }, multipart, allow });
         }
       }
     } else if (Array.isArray(layer.handle.stack)) {
@@ -142,7 +152,7 @@ function walk(stack: LayerLike[], prefix: string, out: RouteEntry[]) {
           throw new Error(`route inventory: router.listRoutes() under ${prefix} lists ${JSON.stringify(theirs)} but the stack walk read ${JSON.stringify(ours)}`);
         }
       }
-      for (const p of paths) walk(childStack, joinPath(prefix, p), out);
+      for (const p of paths) walk(childStack, joinPath(prefix, p), out, guarded);
     }
   }
 }

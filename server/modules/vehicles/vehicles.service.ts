@@ -2,6 +2,7 @@ import { eq, sql } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import type { DbOrTx } from "../../db/client.ts";
+import type { DealershipDay } from "../../lib/clock.ts";
 import { dealerships, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
 import { AppError, badRequest, conflict, forbidden, notFound, staleVersion } from "../../lib/errors.ts";
 import { auditFor, diffFields, recordAudit } from "../audit/audit.service.ts";
@@ -82,8 +83,9 @@ export async function history(ctx: AppContext, actor: User, id: number) {
   };
 }
 
-export async function create(ctx: AppContext, actor: User, input: CreateVehicleInput) {
+export async function create(ctx: AppContext, actor: User, input: CreateVehicleInput, day: DealershipDay) {
   return ctx.database.db.transaction(async (tx) => {
+    // Locks the dealership row: the stock number is counted on it.
     const d = await getDealership(tx, actor.dealershipId, true);
     enforceVin(input.vin, d);
     const columns = toColumns(input, d.distanceUnit);
@@ -96,7 +98,7 @@ export async function create(ctx: AppContext, actor: User, input: CreateVehicleI
       make: input.make!,
       model: input.model!,
     } as Stored & { make: string; model: string };
-    const derived = deriveFor(base as never, d, todayFor(ctx, d));
+    const derived = deriveFor(base as never, d, day.today);
     const [result] = await tx.insert(vehicles).values({
       ...base,
       dealershipId: d.id,
@@ -115,7 +117,7 @@ export async function create(ctx: AppContext, actor: User, input: CreateVehicleI
   });
 }
 
-export async function update(ctx: AppContext, actor: User, id: number, input: UpdateVehicleInput) {
+export async function update(ctx: AppContext, actor: User, id: number, input: UpdateVehicleInput, { dealership: d, today }: DealershipDay) {
   const { version, ...changes } = input;
   const fields = Object.keys(changes);
   const refused = forbiddenFields(actor.role, fields);
@@ -125,8 +127,6 @@ export async function update(ctx: AppContext, actor: User, id: number, input: Up
   return ctx.database.db.transaction(async (tx) => {
     const current = await findVehicle(tx, actor.dealershipId, id, true);
     if (!current) throw notFound("That vehicle");
-    const d = await getDealership(tx, actor.dealershipId);
-    const today = todayFor(ctx, d);
     if (current.version !== version) throw staleVersion(presentVehicle(current, deriveFor(current, d, today), ctx.now()));
     if ("vin" in changes) enforceVin(changes.vin, d);
     const columns = toColumns(changes, current.odometerUnit);
