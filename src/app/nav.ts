@@ -1,23 +1,23 @@
 import type { Role } from "../../shared/constants/roles.ts";
+import { can, type Action } from "../../shared/permissions.ts";
 
 export interface NavItem {
   to: string;
   label: string;
-  roles: readonly Role[];
+  /** The action the page is for; the item shows to whoever may take it (shared/permissions.ts). */
+  action: Action;
   end?: boolean;
 }
 
-const everyone = ["admin", "sales", "workshop", "marketing"] as const;
-
 /** The staff navigation. The server enforces every permission; this only hides what a role cannot use. */
 export const NAV: NavItem[] = [
-  { to: "/app", label: "Overview", roles: everyone, end: true },
-  { to: "/app/vehicles", label: "Stock", roles: everyone },
-  { to: "/app/leads", label: "Enquiries", roles: ["admin", "sales", "marketing"] },
-  { to: "/app/feeds", label: "Feeds", roles: ["admin", "marketing"] },
-  { to: "/app/users", label: "Staff", roles: ["admin"] },
-  { to: "/app/settings", label: "Dealership", roles: ["admin"] },
-  { to: "/app/mail", label: "Mail", roles: ["admin"] },
+  { to: "/app", label: "Overview", action: "staff.enter", end: true },
+  { to: "/app/vehicles", label: "Stock", action: "vehicles.read" },
+  { to: "/app/leads", label: "Enquiries", action: "leads.stats" },
+  { to: "/app/feeds", label: "Feeds", action: "feeds.manage" },
+  { to: "/app/users", label: "Staff", action: "users.manage" },
+  { to: "/app/settings", label: "Dealership", action: "dealership.edit" },
+  { to: "/app/mail", label: "Mail", action: "mail.read" },
 ];
 
-export const navFor = (role: Role) => NAV.filter((item) => item.roles.includes(role));
+export const navFor = (user: { role: Role }) => NAV.filter((item) => can(user, item.action));

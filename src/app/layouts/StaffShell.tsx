@@ -41,7 +41,7 @@ export default function StaffShell() {
         </div>
         <nav aria-label="Staff" className="overflow-x-auto px-3 pb-3 lg:pb-6">
           <ul className="flex gap-1 lg:flex-col">
-            {navFor(user.role).map((item) => (
+            {navFor(user).map((item) => (
               <li key={item.to}>
                 <NavLink
                   to={item.to}

@@ -1,5 +1,6 @@
 import { Link, NavLink, Outlet, useOutletContext, useParams } from "react-router";
-import { useStaffUser } from "../RequireRole.tsx";
+import { useStaffUser } from "../RequireAction.tsx";
+import { can } from "../../../shared/permissions.ts";
 import { useDealership, type DealershipView } from "../../features/settings/api/dealership.ts";
 import { useVehicle, type VehicleView } from "../../features/vehicles/api/vehicles.ts";
 import { StatusActions } from "../../features/vehicles/components/StatusActions.tsx";
@@ -90,7 +91,7 @@ export default function VehicleLayout() {
           <Panel title="Publishing">
             <PublishPanel vehicle={vehicle} role={user.role} />
           </Panel>
-          {user.role === "admin" || user.role === "sales" ? (
+          {can(user, "vehicle.share") ? (
             <Panel title="Send to a buyer">
               <ShareVehicle vehicleId={vehicle.id} published={Boolean(vehicle.publishing.url) && (vehicle.status === "live" || vehicle.status === "reserved")} />
             </Panel>

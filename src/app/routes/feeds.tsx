@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { RequireRole } from "../RequireRole.tsx";
+import { RequireAction } from "../RequireAction.tsx";
 import { useFeeds } from "../../features/feeds/api/feeds.ts";
 import { FeedCard } from "../../features/feeds/components/FeedCard.tsx";
 import { FeedForm } from "../../features/feeds/components/FeedForm.tsx";
@@ -36,8 +36,8 @@ function FeedsPage() {
 
 export default function FeedsRoute() {
   return (
-    <RequireRole roles={["admin", "marketing"]}>
+    <RequireAction action="feeds.manage">
       <FeedsPage />
-    </RequireRole>
+    </RequireAction>
   );
 }

@@ -1,5 +1,5 @@
 import { Link, useParams } from "react-router";
-import { RequireRole, useStaffUser } from "../RequireRole.tsx";
+import { RequireAction, useStaffUser } from "../RequireAction.tsx";
 import { useLead, type LeadDetail } from "../../features/leads/api/leads.ts";
 import { WorkPanel } from "../../features/leads/components/WorkPanel.tsx";
 import { ReplyForm } from "../../features/leads/components/ReplyForm.tsx";
@@ -121,8 +121,8 @@ export default function LeadDetailRoute() {
   const { id } = useParams();
   const n = Number(id);
   return (
-    <RequireRole roles={["admin", "sales"]}>
+    <RequireAction action="leads.read">
       {Number.isInteger(n) && n > 0 ? <LeadPage key={n} id={n} /> : <Notice tone="danger" title="There is no such lead"><Link to="/app/leads">Back to the enquiries</Link></Notice>}
-    </RequireRole>
+    </RequireAction>
   );
 }

@@ -1,5 +1,5 @@
 import { useSearchParams } from "react-router";
-import { RequireRole, useStaffUser } from "../RequireRole.tsx";
+import { RequireAction, useStaffUser } from "../RequireAction.tsx";
 import { useLeadList, useLeadStats, type LeadFilters } from "../../features/leads/api/leads.ts";
 import { LeadsTable } from "../../features/leads/components/LeadsTable.tsx";
 import { LeadFiltersBar } from "../../features/leads/components/LeadFiltersBar.tsx";
@@ -7,6 +7,7 @@ import { LeadStatsView } from "../../features/leads/components/LeadStatsView.tsx
 import { PageHeader } from "../../components/ui/Page.tsx";
 import { EmptyState, Loading, Notice } from "../../components/feedback/Notice.tsx";
 import { LEAD_STATUSES, type LeadStatus } from "../../../shared/constants/leads.ts";
+import { can } from "../../../shared/permissions.ts";
 
 const pick = <T extends string>(v: string | null, allowed: readonly T[]) => (v && (allowed as readonly string[]).includes(v) ? (v as T) : undefined);
 
@@ -75,5 +76,5 @@ function Counts() {
 
 export default function LeadsRoute() {
   const me = useStaffUser();
-  return <RequireRole roles={["admin", "sales", "marketing"]}>{me.role === "marketing" ? <Counts /> : <Inbox />}</RequireRole>;
+  return <RequireAction action="leads.stats">{can(me, "leads.read") ? <Inbox /> : <Counts />}</RequireAction>;
 }

@@ -1,4 +1,4 @@
-import { RequireRole } from "../RequireRole.tsx";
+import { RequireAction } from "../RequireAction.tsx";
 import { useOutbox, useRetryOutbox } from "../../features/mail/api/mail.ts";
 import { OutboxTable } from "../../features/mail/components/OutboxTable.tsx";
 import { CapturedMail } from "../../features/mail/components/CapturedMail.tsx";
@@ -52,8 +52,8 @@ function MailPage() {
 
 export default function MailOutboxRoute() {
   return (
-    <RequireRole roles={["admin"]}>
+    <RequireAction action="mail.read">
       <MailPage />
-    </RequireRole>
+    </RequireAction>
   );
 }

@@ -1,4 +1,4 @@
-import { RequireRole } from "../RequireRole.tsx";
+import { RequireAction } from "../RequireAction.tsx";
 import { useDealership } from "../../features/settings/api/dealership.ts";
 import { SettingsForm } from "../../features/settings/components/SettingsForm.tsx";
 import { PageHeader } from "../../components/ui/Page.tsx";
@@ -16,8 +16,8 @@ function SettingsPage() {
 
 export default function SettingsRoute() {
   return (
-    <RequireRole roles={["admin"]}>
+    <RequireAction action="dealership.edit">
       <SettingsPage />
-    </RequireRole>
+    </RequireAction>
   );
 }

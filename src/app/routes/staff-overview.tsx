@@ -1,5 +1,5 @@
 import { Link } from "react-router";
-import { useStaffUser } from "../RequireRole.tsx";
+import { useStaffUser } from "../RequireAction.tsx";
 import { navFor } from "../nav.ts";
 import { PageHeader, Panel } from "../../components/ui/Page.tsx";
 import { ROLE_LABELS } from "../../../shared/constants/roles.ts";
@@ -7,7 +7,7 @@ import { ROLE_LABELS } from "../../../shared/constants/roles.ts";
 export default function StaffOverview() {
   const user = useStaffUser();
   const first = user.name.split(" ")[0];
-  const places = navFor(user.role).filter((n) => n.to !== "/app");
+  const places = navFor(user).filter((n) => n.to !== "/app");
   return (
     <>
       <PageHeader title={`Hello, ${first}`} lead={`Signed in as ${ROLE_LABELS[user.role].label.toLowerCase()}. ${ROLE_LABELS[user.role].summary}`} />

@@ -1,4 +1,4 @@
-import { RequireRole, useStaffUser } from "../RequireRole.tsx";
+import { RequireAction, useStaffUser } from "../RequireAction.tsx";
 import { useUsers } from "../../features/users/api/users.ts";
 import { UsersTable } from "../../features/users/components/UsersTable.tsx";
 import { AddUserForm } from "../../features/users/components/AddUserForm.tsx";
@@ -28,8 +28,8 @@ function UsersPage() {
 
 export default function UsersRoute() {
   return (
-    <RequireRole roles={["admin"]}>
+    <RequireAction action="users.manage">
       <UsersPage />
-    </RequireRole>
+    </RequireAction>
   );
 }

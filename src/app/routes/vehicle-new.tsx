@@ -1,5 +1,5 @@
 import { Link } from "react-router";
-import { RequireRole, useStaffUser } from "../RequireRole.tsx";
+import { RequireAction, useStaffUser } from "../RequireAction.tsx";
 import { useDealership } from "../../features/settings/api/dealership.ts";
 import { VehicleEditor } from "../../features/vehicles/editor/VehicleEditor.tsx";
 import { PageHeader } from "../../components/ui/Page.tsx";
@@ -19,8 +19,8 @@ function NewVehicle() {
 
 export default function VehicleNewRoute() {
   return (
-    <RequireRole roles={["admin", "sales"]}>
+    <RequireAction action="vehicle.create">
       <NewVehicle />
-    </RequireRole>
+    </RequireAction>
   );
 }

@@ -4,12 +4,13 @@ import { UploadQueue } from "../../features/photos/components/UploadQueue.tsx";
 import { PhotoGrid } from "../../features/photos/components/PhotoGrid.tsx";
 import { EmptyState, Loading, Notice } from "../../components/feedback/Notice.tsx";
 import { Panel } from "../../components/ui/Page.tsx";
+import { can } from "../../../shared/permissions.ts";
 
 export default function VehiclePhotosRoute() {
   const { vehicle, dealership, user } = useVehicleContext();
   const photos = usePhotos(vehicle.id);
   const refresh = useRefreshPhotos(vehicle.id);
-  const editable = user.role !== "marketing";
+  const editable = can(user, "evidence.write");
   const count = photos.data?.photos.length ?? vehicle.evidence.photos.length;
   return (
     <div className="flex flex-col gap-6">

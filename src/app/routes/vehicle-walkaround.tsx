@@ -8,6 +8,7 @@ import { UploadQueue } from "../../features/photos/components/UploadQueue.tsx";
 import { useRefreshPhotos } from "../../features/photos/api/photos.ts";
 import { DEFECT_KIND_LABELS, REPAIR_PLAN_LABELS, SEVERITY_LABELS, ZONES, ZONE_LABELS, type Severity, type Zone } from "../../../shared/constants/evidence.ts";
 import { Notice } from "../../components/feedback/Notice.tsx";
+import { can } from "../../../shared/permissions.ts";
 
 const STATE_TEXT = { unchecked: "To check", nothing_found: "Nothing found", defects: "Defects noted" } as const;
 
@@ -18,7 +19,7 @@ export default function VehicleWalkaroundRoute() {
   const [params, setParams] = useSearchParams();
   const firstUnchecked = zones.find((z) => z.state === "unchecked")?.zone ?? ZONES[0];
   const zone = (ZONES as readonly string[]).includes(params.get("zone") ?? "") ? (params.get("zone") as Zone) : firstUnchecked;
-  const editable = user.role !== "marketing";
+  const editable = can(user, "evidence.write");
   const writes = useWalkaroundWrites(vehicle.id);
   const refreshPhotos = useRefreshPhotos(vehicle.id);
 

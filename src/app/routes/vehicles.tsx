@@ -4,7 +4,8 @@ import { useQuery } from "@tanstack/react-query";
 import { useVehicleList, suggestionsQueryOptions } from "../../features/vehicles/api/vehicles.ts";
 import { StockTable } from "../../features/vehicles/components/StockTable.tsx";
 import { useDealership } from "../../features/settings/api/dealership.ts";
-import { useStaffUser } from "../RequireRole.tsx";
+import { useStaffUser } from "../RequireAction.tsx";
+import { can } from "../../../shared/permissions.ts";
 import { PageHeader } from "../../components/ui/Page.tsx";
 import { Button } from "../../components/ui/Button.tsx";
 import { EmptyState, Loading, Notice } from "../../components/feedback/Notice.tsx";
@@ -52,7 +53,7 @@ export default function VehiclesRoute() {
 
   const currency = dealership.data?.dealership.currency ?? "AUD";
   const locale = dealership.data?.dealership.locale ?? "en";
-  const canCreate = user.role === "admin" || user.role === "sales";
+  const canCreate = can(user, "vehicle.create");
   const filtered = [...params.keys()].some((k) => k !== "sort" && k !== "page");
   const activeFilters = new Set([...params.keys()].filter((k) => k !== "sort" && k !== "page" && k !== "q").map((k) => k.replace(/From$|To$/, ""))).size;
   const [showFilters, setShowFilters] = useState(false);

@@ -30,15 +30,6 @@ export type ChecksForm = Record<CheckItem, CheckForm>;
 /** Field errors keyed for the screen: `measuredOn`, `tyre.<position>.<field>`, `check.<item>.<field>`, `tyres._`, `checks._`. */
 export type FieldErrors = Record<string, string>;
 
-/** The dealership's calendar day (the server validates "not in the future" against the same day). */
-export function todayIn(timeZone: string | undefined): string {
-  try {
-    return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date());
-  } catch {
-    return new Date().toLocaleDateString("en-CA");
-  }
-}
-
 const text = (n: number | string | null | undefined) => (n == null ? "" : String(n));
 const emptyTyre = (): TyreForm => ({ treadInnerMm: "", treadCentreMm: "", treadOuterMm: "", sizeDesignation: "", dotCode: "", pressureKpa: "" });
 

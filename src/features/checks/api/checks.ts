@@ -8,7 +8,6 @@ import type { presentChecks } from "../../../../server/modules/checks/checks.ser
 export type ChecksView = ReturnType<typeof presentChecks>;
 export type TyresView = ChecksView["tyres"];
 export type ChecksSetView = ChecksView["checks"];
-export type CautionView = ChecksView["cautions"][number];
 
 export const fetchChecks = (vehicleId: number) => get<ChecksView>(`/api/vehicles/${vehicleId}/checks`);
 

@@ -3,12 +3,14 @@ import { CHECK_ITEMS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "
 import { NOT_A_CERTIFICATE } from "../../../../shared/domain/cautions.ts";
 import { formatTreadDepth } from "../../../../shared/domain/display.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
+import { can } from "../../../../shared/permissions.ts";
+import { dealershipDay } from "../../../../shared/domain/calendar.ts";
 import { isApiError } from "../../../lib/api-client.ts";
 import type { VehicleView } from "../../vehicles/api/vehicles.ts";
 import type { DealershipView } from "../../settings/api/dealership.ts";
 import { useReloadChecks, useSaveChecks, useSaveTyres, type ChecksView } from "../api/checks.ts";
 import {
-  checkErrorKeys, checksDirty, checksFormFrom, liveCautions, todayIn, tyreErrorKeys, tyresDirty, tyresFormFrom, validateChecks, validateTyres,
+  checkErrorKeys, checksDirty, checksFormFrom, liveCautions, tyreErrorKeys, tyresDirty, tyresFormFrom, validateChecks, validateTyres,
   type CheckForm, type ChecksForm, type FieldErrors, type TyreField, type TyresForm,
 } from "../form-model.ts";
 import { Button } from "../../../components/ui/Button.tsx";
@@ -18,8 +20,6 @@ import { CheckRow } from "./CheckRow.tsx";
 import { TyreCard } from "./TyreCard.tsx";
 import { Measure } from "./inputs.tsx";
 
-/** Who records condition evidence (server/modules/checks/checks.routes.ts WRITERS); marketing reads it. */
-const EDITORS: readonly Role[] = ["admin", "sales", "workshop"];
 const ROAD: readonly TyrePosition[] = TYRE_POSITIONS.filter((p) => p !== "spare");
 
 interface Props {
@@ -32,8 +32,8 @@ const messageOf = (e: unknown) => (e instanceof Error ? e.message : "Something w
 
 /** Tyres and checks, phone first: what is typed stays in the form until it is saved or the person chooses theirs. */
 export function ChecksScreen({ vehicle, dealership, role }: Props) {
-  const canEdit = EDITORS.includes(role);
-  const today = todayIn(dealership.timeZone);
+  const canEdit = can(role, "evidence.write");
+  const today = dealershipDay(dealership.timeZone);
   const rules = useMemo(() => ({ legalMinTreadMm: dealership.legalMinTreadMm, newTyreTreadMm: dealership.newTyreTreadMm }), [dealership.legalMinTreadMm, dealership.newTyreTreadMm]);
   const locale = dealership.locale;
   const ev = vehicle.evidence;
@@ -123,7 +123,7 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
     if (!canEdit || busy || !dirty) return;
     setProblem(null);
     setNote(null);
-    const day = todayIn(dealership.timeZone);
+    const day = dealershipDay(dealership.timeZone);
     const sentTyres = tyres;
     const sentChecks = checks;
     // The same schemas the server uses, so mistakes show before anything is sent.

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { del, get, patch, post } from "../../../lib/api-client.ts";
-import type { CreateFeedInput, PreviewFeedInput, UpdateFeedInput } from "../../../../shared/schemas/feeds.ts";
+import { del, get, post } from "../../../lib/api-client.ts";
+import type { CreateFeedInput, PreviewFeedInput } from "../../../../shared/schemas/feeds.ts";
 import type { FeedPreview, FeedView } from "../../../../server/modules/feeds/feeds.presenter.ts";
 
 export type { FeedPreview, FeedView };
@@ -9,7 +9,6 @@ export type FeedWithUrl = FeedView & { url: string };
 export const feedKeys = {
   all: ["feeds"] as const,
   lists: () => [...feedKeys.all, "list"] as const,
-  detail: (id: number) => [...feedKeys.all, "detail", id] as const,
 };
 
 // The fetch log matters while marketing watches a portal start polling, so the list refreshes itself.
@@ -27,14 +26,6 @@ export function useCreateFeed() {
 }
 
 export const usePreviewFeed = () => useMutation({ mutationFn: (input: PreviewFeedInput) => post<{ preview: FeedPreview }>("/api/feeds/preview", input) });
-
-export function useUpdateFeed() {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: ({ id, ...input }: UpdateFeedInput & { id: number }) => patch<{ feed: FeedView }>(`/api/feeds/${id}`, input),
-    onSettled: () => qc.invalidateQueries({ queryKey: feedKeys.lists() }),
-  });
-}
 
 export function useRotateFeed() {
   const qc = useQueryClient();

@@ -2,8 +2,10 @@ import { Link } from "react-router";
 import type { LeadRow } from "../api/leads.ts";
 import { CONTACT_LABELS } from "../../../../shared/constants/leads.ts";
 import { ageWords, followUpState } from "../format.ts";
+import { useDealershipDay } from "../../settings/api/dealership.ts";
 
 export function LeadsTable({ leads, selfId }: { leads: LeadRow[]; selfId: string }) {
+  const today = useDealershipDay();
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-paper-raised">
       <table className="w-full text-left text-sm">
@@ -21,7 +23,7 @@ export function LeadsTable({ leads, selfId }: { leads: LeadRow[]; selfId: string
         </thead>
         <tbody>
           {leads.map((l) => {
-            const due = followUpState(l.followUpOn);
+            const due = followUpState(l.followUpOn, today);
             return (
               <tr key={l.id} className="border-b border-line last:border-0 align-top">
                 <td className="px-4 py-3">{l.statusLabel}</td>

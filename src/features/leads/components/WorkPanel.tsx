@@ -8,6 +8,8 @@ import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { LEAD_STATUSES, LEAD_STATUS_LABELS, type LeadStatus } from "../../../../shared/constants/leads.ts";
 import type { SessionUser } from "../../../../shared/schemas/auth.ts";
+import { can } from "../../../../shared/permissions.ts";
+import { useDealershipDay } from "../../settings/api/dealership.ts";
 import { followUpState } from "../format.ts";
 
 interface Edits {
@@ -21,7 +23,7 @@ const useAssignable = (enabled: boolean) =>
   useQuery({
     ...usersQueryOptions(),
     enabled,
-    select: (d) => d.users.filter((u) => u.active && (u.role === "sales" || u.role === "admin")),
+    select: (d) => d.users.filter((u) => u.active && can(u, "leads.work")),
   });
 
 /**
@@ -34,8 +36,9 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
   const [note, setNote] = useState("");
   const [saved, setSaved] = useState<string | null>(null);
   const [pending, setPending] = useState<"take" | "save" | null>(null);
-  const isAdmin = me.role === "admin";
-  const people = useAssignable(isAdmin);
+  const mayAssign = can(me, "leads.assign");
+  const people = useAssignable(mayAssign);
+  const today = useDealershipDay();
 
   const status = edits.status ?? lead.status;
   const assigneeId = edits.assigneeId !== undefined ? edits.assigneeId : lead.assigneeId;
@@ -81,7 +84,7 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
     onReload();
   }
 
-  const due = followUpState(followUpOn);
+  const due = followUpState(followUpOn, today);
   const assigneeWords = lead.assigneeId ? (lead.assigneeId === me.id ? "You" : lead.assigneeName ?? "Someone") : "Nobody yet";
 
   return (
@@ -107,7 +110,7 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
         ))}
       </SelectField>
 
-      {isAdmin ? (
+      {mayAssign ? (
         <SelectField
           label="Assigned to"
           name="assigneeId"

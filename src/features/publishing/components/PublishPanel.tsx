@@ -2,6 +2,7 @@ import { useState } from "react";
 import { Link } from "react-router";
 import type { VehicleView } from "../../vehicles/api/vehicles.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
+import { can } from "../../../../shared/permissions.ts";
 import { usePublish } from "../api/publishing.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
@@ -15,7 +16,7 @@ export function PublishPanel({ vehicle, role }: { vehicle: VehicleView; role: Ro
   const publish = usePublish(vehicle.id);
   const [reason, setReason] = useState("");
   const [done, setDone] = useState<string | null>(null);
-  const canPublish = role === "admin" || role === "sales";
+  const canPublish = can(role, "vehicle.publish");
   const statusAllows = ["preparing", "live", "reserved", "withdrawn"].includes(vehicle.status);
   const base = `/app/vehicles/${vehicle.id}`;
   const fieldError = publish.error?.fields?.overrideReason;
@@ -41,7 +42,7 @@ export function PublishPanel({ vehicle, role }: { vehicle: VehicleView; role: Ro
           <Button busy={publish.isPending} onClick={() => publish.mutate({ version: vehicle.version }, { onSuccess: (r) => setDone(`Revision ${r.revision.number} is live.`) })}>
             {publishing.revisions.length ? "Publish the changes" : "Publish"}
           </Button>
-        ) : role === "admin" ? (
+        ) : can(role, "publish.override") ? (
           <div className="flex flex-col gap-2 rounded-md border border-ochre bg-ochre-wash p-3">
             <label htmlFor="override" className="text-sm font-bold">Publish over the block (admin)</label>
             <textarea id="override" className="min-h-20 rounded-md border border-line-strong bg-paper-raised p-2 text-sm" value={reason} onChange={(e) => setReason(e.target.value)} placeholder="Why this vehicle may be published as it is. Recorded and shown to staff." />

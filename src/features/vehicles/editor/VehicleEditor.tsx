@@ -1,6 +1,7 @@
 import { useEffect, useMemo, useRef, useState, type FormEvent } from "react";
 import { useNavigate } from "react-router";
 import { computeDerived } from "../../../../shared/domain/derived.ts";
+import { dealershipDay } from "../../../../shared/domain/calendar.ts";
 import { createVehicleSchema, updateVehicleSchema } from "../../../../shared/schemas/vehicles.ts";
 import { canEditGroup, fieldGroup } from "../../../../shared/constants/vehicle-fields.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
@@ -18,8 +19,6 @@ import { DescriptionEditor } from "./DescriptionEditor.tsx";
 import { SelectField, TextField } from "../../../components/form/Field.tsx";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
-
-const todayLocal = () => new Date().toLocaleDateString("en-CA");
 
 interface Props {
   vehicle?: VehicleView;
@@ -85,7 +84,7 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
         kerbWeightKg: n("kerbWeightKg"),
         serviceHistory: (input.serviceHistory as Array<{ date: string; odometerKm: unknown; kind: string }>).map((e) => ({ ...e, odometerKm: liveNumber(e.odometerKm) })),
       },
-      { today: todayLocal(), checkDigitMandatory: dealership.vinCheckDigitMandatory, serviceIntervalKm: dealership.serviceIntervalKm, serviceIntervalMonths: dealership.serviceIntervalMonths },
+      { today: dealershipDay(dealership.timeZone), checkDigitMandatory: dealership.vinCheckDigitMandatory, serviceIntervalKm: dealership.serviceIntervalKm, serviceIntervalMonths: dealership.serviceIntervalMonths },
     );
   }, [input, dealership]);
 
@@ -109,7 +108,7 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
   function submit(e: FormEvent) {
     e.preventDefault();
     setSaved(false);
-    const today = todayLocal();
+    const today = dealershipDay(dealership.timeZone);
     const body = base ? { ...changedFields(input, baseInput), version: base.version } : Object.fromEntries(Object.entries(input).filter(([, v]) => v !== null));
     // The same schema the server uses, so most mistakes are shown before anything is sent.
     const check = (base ? updateVehicleSchema(today) : createVehicleSchema(today)).safeParse(body);
