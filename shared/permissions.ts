@@ -28,9 +28,11 @@ export const PERMISSIONS = {
   "vehicle.history.edit": WORKSHOP,
   "vehicle.listing.edit": ["admin", "sales", "marketing"],
   "vehicle.price.edit": SELLERS,
-  /** Status moves: preparing work (intake ↔ preparing) and the sale's moves; shared/domain/status.ts names one per move. */
+  /** Status moves: start preparing (intake → preparing) and the sale's moves; shared/domain/status.ts names one per move. */
   "vehicle.status.move": WORKSHOP,
   "status.prepare": WORKSHOP,
+  /** Send a vehicle back a stage (preparing → intake, withdrawn → preparing): the workshop only moves work forward. */
+  "status.send-back": SELLERS,
   "status.sell": SELLERS,
   "status.undo-sale": ADMIN,
   "status.archive-unsold": ADMIN,
@@ -52,6 +54,8 @@ export const PERMISSIONS = {
   "dealership.edit": ADMIN,
   /** The outbox, and in demo mode the mail the local catcher received. */
   "mail.read": ADMIN,
+  /** Send the outbox's waiting mail now rather than at its next attempt. */
+  "mail.retry": ADMIN,
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof PERMISSIONS;

@@ -1,8 +1,6 @@
 import type { RequestHandler } from "express";
 import type { Session, User } from "lucia";
 import type { Auth } from "../modules/auth/lucia.ts";
-import { forbidden, unauthorized } from "../lib/errors.ts";
-import type { Role } from "../../shared/constants/roles.ts";
 
 export interface SignedIn {
   user: User;
@@ -11,10 +9,8 @@ export interface SignedIn {
 
 declare module "express-serve-static-core" {
   interface Locals {
+    /** Set on every /api request: who is signed in, or null. Handlers get the user from route() (server/middleware/route.ts). */
     auth?: SignedIn | null;
-    body?: unknown;
-    query?: unknown;
-    params?: unknown;
   }
 }
 
@@ -37,22 +33,4 @@ export function loadSession(auth: Auth): RequestHandler {
     res.locals.auth = { session, user };
     next();
   };
-}
-
-/** 401 when nobody is signed in; 403 when the signed-in role is not among those allowed. */
-export function requireRole(...roles: Role[]): RequestHandler {
-  return (_req, res, next) => {
-    const auth = res.locals.auth;
-    if (!auth) throw unauthorized();
-    if (roles.length && !roles.includes(auth.user.role)) throw forbidden();
-    next();
-  };
-}
-
-export const requireStaff = requireRole();
-
-/** The signed-in user of a request that passed requireRole. */
-export function currentUser(locals: { auth?: SignedIn | null }): User {
-  if (!locals.auth) throw unauthorized();
-  return locals.auth.user;
 }

@@ -24,26 +24,15 @@ export interface ValidatorInfo {
 }
 
 /**
- * The key under which `validate()` keeps its ValidatorInfo. A symbol and a non-enumerable property, so nothing that
- * copies or logs the function sees it; only code that asks with `validatorInfo()` does.
+ * The key under which a validator of route() (server/middleware/route.ts) keeps its ValidatorInfo. A symbol and a
+ * non-enumerable property, so nothing that copies or logs the function sees it; only code that asks with
+ * `validatorInfo()` does.
  */
 const VALIDATES = Symbol.for("forthright.validates");
 
-/** The part and schema a middleware returned by `validate()` checks, or undefined for any other function. */
+/** The part and schema a validating middleware checks, or undefined for any other function. */
 export function validatorInfo(fn: unknown): ValidatorInfo | undefined {
   return typeof fn === "function" ? ((fn as unknown as Record<symbol, ValidatorInfo | undefined>)[VALIDATES] ?? undefined) : undefined;
-}
-
-/**
- * Validates one part of the request and keeps the parsed value on `res.locals[part]` (Express 5 makes
- * `req.query` read-only), so handlers read typed input and never the raw request.
- */
-export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHandler {
-  const middleware: RequestHandler = (req, res, next) => {
-    res.locals[part] = parseOr400(schema, req[part] ?? {}, part === "body" ? "form" : part);
-    next();
-  };
-  return tagValidator(middleware, part, schema);
 }
 
 /** Keeps what a validating middleware checks on it, for `validatorInfo()`. */

@@ -15,8 +15,25 @@ export const newPasswordSchema = z
 
 export const versionSchema = z.number({ error: "The record's version is missing." }).int().min(1);
 
-export const idParamSchema = z.object({ id: z.string().min(1).max(255) });
-export const numericIdParamSchema = z.object({ id: z.coerce.number().int().positive() });
+// Path parameters: one schema per shape, shared by every route that has it (server/middleware/route.ts `params`).
+const positiveId = z.coerce.number().int().positive();
 
-/** `:id` of a vehicle (and of any record with a numeric id) in a path. */
-export const vehicleIdParams = numericIdParamSchema;
+/** `:id` of a record with a numeric id: a lead, a feed, a captured mail. */
+export const idParams = z.object({ id: positiveId });
+/** `:id` of a vehicle, and the routes under it. */
+export const vehicleIdParams = idParams;
+/** `:id/photos/:photoId`. */
+export const photoParams = vehicleIdParams.extend({ photoId: positiveId });
+/** `:id/defects/:defectId`. */
+export const defectParams = vehicleIdParams.extend({ defectId: positiveId });
+/** `:id` of a staff account (a generated text id). */
+export const userIdParams = z.object({ id: z.string().min(1).max(255) });
+/** `:slug` of a published vehicle: fixed at its first publish, lower-case letters, digits and hyphens. */
+export const slugParams = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,120}$/) });
+/** `:slug/revisions/:number`. */
+export const revisionParams = slugParams.extend({ number: positiveId });
+/** `:token` of an invitation, checked by looking it up (any text is a well-formed question). */
+export const tokenParams = z.object({ token: z.string() });
+
+/** `?version=` of a delete: the version the caller last saw. */
+export const versionQuery = z.object({ version: z.coerce.number().int().min(1) });

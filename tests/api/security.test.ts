@@ -11,7 +11,7 @@ import path from "node:path";
 import { pino } from "pino";
 import { DEMO_PASSWORD, ORIGIN, startTestApp, type TestApp } from "../support/app.ts";
 import { routeInventory, samplePath, STATE_CHANGING, type RouteEntry } from "../support/routes.ts";
-import { CALLERS, ROUTE_POLICY, type Caller } from "../support/route-policy.ts";
+import { CALLERS, callersOf, ROUTE_POLICY, type Caller } from "../support/route-policy.ts";
 import { changedTables, tableChecksums } from "../support/db-state.ts";
 import { landscapeJpeg, SVG_WITH_SCRIPT } from "../support/images.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
@@ -19,7 +19,7 @@ import { dieselSuv } from "../support/vehicles.ts";
 import { createTestDatabase } from "../support/database.ts";
 import { createContext } from "../../server/lib/boot.ts";
 import { createApp } from "../../server/app.ts";
-import { seedDemo, DEMO_USERS } from "../../server/db/seed/demo.ts";
+import { seedDemo, DEMO_USERS } from "../../server/demo/demo.ts";
 import { SESSION_COOKIE } from "../../server/modules/auth/lucia.ts";
 
 type Agent = ReturnType<typeof request.agent>;
@@ -64,7 +64,7 @@ describe("route inventory", () => {
     expect(routes.find((r) => r.key === "POST /api/vehicles/:id/photos")!.multipart).toBe(true);
   });
 
-  it("when a JSON body is taken by a state-changing API route, then a schema for it is known (from validate() or the inline list)", () => {
+  it("when a JSON body is taken by a state-changing API route, then a schema for it is known (from route() or the inline list)", () => {
     // Routes that take no body at all: sign-out, retrying the outbox, rotating a feed's token, deleting a feed; photo
     // uploads are multipart (multer, then sharp decides).
     const NO_BODY = new Set(["POST /api/auth/sign-out", "POST /api/mail/outbox/retry", "POST /api/feeds/:id/rotate", "DELETE /api/feeds/:id", "DELETE /api/vehicles/:id/photos/:photoId", "DELETE /api/vehicles/:id/defects/:defectId", "POST /api/vehicles/:id/photos"]);
@@ -80,12 +80,24 @@ describe("route × role matrix", () => {
     expect(Object.keys(ROUTE_POLICY).filter((k) => !keys.has(k)), "policy entries for routes the app no longer has").toEqual([]);
   });
 
+  it("when the router is read, then each route's guard checks the action the policy table names", () => {
+    // Routes outside /api (public pages, media, the feed files, the client) may have no guard at all: anyone.
+    const wrong = routes
+      .filter((r) => ROUTE_POLICY[r.key])
+      .map((r) => ({ key: r.key, guard: r.allow ?? (r.path.startsWith("/api/") ? "no guard" : "anyone"), policy: ROUTE_POLICY[r.key] }))
+      .filter((r) => r.guard !== r.policy)
+      .map((r) => `${r.key}: the router checks ${r.guard}, the policy names ${r.policy}`);
+    expect(wrong).toEqual([]);
+    // Every /api route is guarded by route() itself, so none is open by accident.
+    expect(routes.filter((r) => r.path.startsWith("/api/") && !r.allow).map((r) => r.key)).toEqual([]);
+  });
+
   it("when every route is called by each role and by the public, then the admitted get past the guard, other staff get 403 and the public 401", async () => {
     const wrong: string[] = [];
     let requests = 0;
     for (const r of routes) {
-      const allowed = ROUTE_POLICY[r.key];
-      if (!allowed) continue;
+      if (!ROUTE_POLICY[r.key]) continue;
+      const allowed = callersOf(r.key);
       for (const caller of CALLERS) {
         // Signing out ends the agent's session, so that one call gets an agent of its own.
         const agent = r.key === "POST /api/auth/sign-out" && caller !== "public" ? await t.signIn(caller) : agents.get(caller)!;

@@ -11,20 +11,19 @@
  * what we read. A router upgrade that drops or renames these fields therefore fails loudly here, never silently
  * shrinks the inventory.
  *
- * Schemas: `validate()` in server/middleware/validate.ts keeps {part, schema} on the middleware it returns
- * (`validatorInfo()`), so a route's schemas are read from its handler stack. A few handlers build their schema per
- * request because it needs the dealership's "today" (vehicles, tyres) or parse inline (the public feed's query);
- * those are listed in INLINE_SCHEMAS below, and a stale entry there (a route that no longer exists) throws.
+ * Schemas and guards: route() in server/middleware/route.ts keeps {part, schema} on each validator it builds
+ * (`validatorInfo()`, a schema of the dealership's day as its function) and the action on its guard (`guardInfo()`),
+ * so a route's schemas and action are read from its handler stack. A handler that parses inline (the public feed's
+ * query) is listed in INLINE_SCHEMAS below, and a stale entry there (a route that no longer exists) throws.
  */
 import type { Express } from "express";
 import type { z } from "zod";
 import { validatorInfo, type Part } from "../../server/middleware/validate.ts";
 import { guardInfo, type Allow } from "../../server/middleware/route.ts";
-import { tyresSchema } from "../../shared/schemas/evidence.ts";
 import { feedQuerySchema } from "../../shared/schemas/feeds.ts";
 import { photoUpload } from "../../server/middleware/upload.ts";
 import { dayIn } from "../../server/lib/clock.ts";
-import { DEMO_DEALERSHIP } from "../../server/db/seed/demo.ts";
+import { DEMO_DEALERSHIP } from "../../server/demo/demo.ts";
 
 export type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 export const STATE_CHANGING: ReadonlySet<Method> = new Set(["POST", "PUT", "PATCH", "DELETE"]);
@@ -37,21 +36,22 @@ export interface RouteEntry {
   key: string;
   /** Names of the path parameters, in order. */
   params: string[];
-  /** The schemas that check each part, from validate() or INLINE_SCHEMAS. */
+  /** The schemas that check each part, from route()'s validators or INLINE_SCHEMAS. */
   schemas: Partial<Record<Part, z.ZodType>>;
   /** Where a schema came from, for messages. */
-  schemaSource: Partial<Record<Part, "validate" | "inline">>;
+  schemaSource: Partial<Record<Part, "route" | "inline">>;
   /** The route takes multipart photo uploads (the multer middleware of server/middleware/upload.ts) rather than JSON. */
   multipart: boolean;
-  /** The action its guard checks (server/middleware/route.ts), from the route's own stack or a router-wide guard. */
+  /** The action its guard checks (server/middleware/route.ts), from the route's own stack or a router-wide guard; undefined without one. */
   allow: Allow | undefined;
 }
 
-/** Schemas a handler builds per request (they need the dealership's calendar day) or parses inline. */
-// The server parses with the dealership's calendar day (server/lib/clock.ts), not UTC's: the demo's is ten hours ahead.
+// Schemas of the dealership's day are built with its calendar day (server/lib/clock.ts), not UTC's: the demo's is
+// ten hours ahead.
 const today = () => dayIn(DEMO_DEALERSHIP.timeZone, new Date());
+
+/** Schemas a handler parses inline rather than through route(). */
 export const INLINE_SCHEMAS: Record<string, Partial<Record<Part, () => z.ZodType>>> = {
-  "PUT /api/vehicles/:id/tyres": { body: () => tyresSchema(today()) },
   "GET /feeds/:file": { query: () => feedQuerySchema },
 };
 
@@ -127,7 +127,7 @@ function walk(stack: LayerLike[], prefix: string, out: RouteEntry[], outer?: All
         const info = validatorInfo(h.handle);
         if (info) {
           schemas[info.part] = typeof info.schema === "function" ? info.schema(today()) : info.schema;
-          schemaSource[info.part] = "validate";
+          schemaSource[info.part] = "route";
         }
         if (h.handle === photoUpload) multipart = true;
         const guard = guardInfo(h.handle);
@@ -167,7 +167,7 @@ export function routeInventory(app: Express): RouteEntry[] {
     if (!keys.has(key)) throw new Error(`route inventory: INLINE_SCHEMAS names ${key}, which the app no longer has`);
     const entry = out.find((r) => r.key === key)!;
     for (const [part, make] of Object.entries(parts) as Array<[Part, () => z.ZodType]>) {
-      if (entry.schemas[part]) throw new Error(`route inventory: ${key} validates its ${part} with validate() now; drop it from INLINE_SCHEMAS`);
+      if (entry.schemas[part]) throw new Error(`route inventory: ${key} validates its ${part} through route() now; drop it from INLINE_SCHEMAS`);
       entry.schemas[part] = make();
       entry.schemaSource[part] = "inline";
     }

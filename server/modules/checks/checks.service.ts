@@ -12,6 +12,7 @@ import { safetyCautions } from "../../../shared/domain/cautions.ts";
 import { CHECK_LABELS, TYRE_POSITION_LABELS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "../../../shared/constants/evidence.ts";
 import type { ChecksInput, TyresInput } from "../../../shared/schemas/evidence.ts";
 import type { Dealership } from "../../db/schema/index.ts";
+import type { DealershipDay } from "../../lib/clock.ts";
 
 const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
 
@@ -63,11 +64,12 @@ const sameReading = (a: Record<string, unknown>, b: Record<string, unknown>) =>
   ["treadInnerMm", "treadCentreMm", "treadOuterMm", "sizeDesignation", "dotCode", "pressureKpa"].every((k) => (a[k] ?? null) === (b[k] ?? null));
 
 /** Replaces the tyre readings as a set, so the record always shows one measuring session. */
-export async function putTyres(ctx: AppContext, actor: User, vehicleId: number, input: TyresInput) {
+export async function putTyres(ctx: AppContext, actor: User, vehicleId: number, input: TyresInput, day?: DealershipDay) {
   return ctx.database.db.transaction(async (tx) => {
     const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
     if (!v) throw notFound("That vehicle");
-    const d = await getDealership(tx, actor.dealershipId);
+    // The route already read the dealership for the schema's "today"; read it here only when called without it.
+    const d = day?.dealership ?? (await getDealership(tx, actor.dealershipId));
     const before = await tyresOf(tx, vehicleId);
     if (v.tyresVersion !== input.version) throw stale("tyre readings", presentChecks(d, v, before, await checksOf(tx, vehicleId)));
     await tx.delete(tyreReadings).where(eq(tyreReadings.vehicleId, vehicleId));

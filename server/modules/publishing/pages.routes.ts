@@ -5,6 +5,7 @@ import { renderIndex } from "../client/client.routes.ts";
 import { publicRepresentation, sitemapEntries } from "./public.service.ts";
 import { representation, sendRepresentation } from "./public-cache.ts";
 import { vehicleHeadTags } from "./seo.ts";
+import { slugParams } from "../../../shared/schemas/common.ts";
 
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
 
@@ -16,8 +17,10 @@ export function pagesRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get(["/vehicles/:slug", "/vehicles/:slug/card", "/vehicles/:slug/revisions/:n"], async (req, res, next) => {
-    const slug = String(req.params.slug);
-    if (!/^[a-z0-9-]{1,120}$/.test(slug)) return next();
+    // Not a slug a vehicle could have: the client's own not-found page, not a server-written one.
+    const parsed = slugParams.safeParse(req.params);
+    if (!parsed.success) return next();
+    const { slug } = parsed.data;
     if (!renderIndex()) return next();
     const card = req.path.endsWith("/card");
     try {
