@@ -47,11 +47,10 @@ export default function AcceptInvite() {
         </dd>
       </dl>
       <NewPasswordForm
-        token={token}
         username={inv.email}
         submitLabel="Create my account"
         busy={accept.isPending}
-        serverFields={fields}
+        error={error}
         serverError={error && !Object.keys(fields).length ? error.message : undefined}
         onSubmit={(password) => accept.mutate({ token, password }, { onSuccess: () => navigate("/app", { replace: true }) })}
       />

@@ -1,28 +1,19 @@
-import { useState, type FormEvent } from "react";
 import { Link } from "react-router";
 import { useRequestReset } from "../../features/accounts/api/accounts.ts";
 import { PublicFrame } from "../../features/accounts/PublicFrame.tsx";
-import { isApiError } from "../../lib/api-client.ts";
 import { TextField } from "../../components/form/Field.tsx";
+import { setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { resetRequestSchema } from "../../../shared/schemas/enquiries.ts";
-import { zodFields } from "../../../shared/schemas/fields.ts";
 
 export default function ForgotPassword() {
   const request = useRequestReset();
-  const [email, setEmail] = useState("");
-  const [clientError, setClientError] = useState<string | undefined>();
+  const form = useZodForm(resetRequestSchema, { defaultValues: { email: "" } });
   const error = request.error;
-  const fieldError = clientError ?? (isApiError(error) ? error.fields.email : undefined);
+  const fieldError = form.formState.errors.email?.message;
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    const parsed = resetRequestSchema.safeParse({ email });
-    if (!parsed.success) return setClientError(zodFields(parsed.error).email);
-    setClientError(undefined);
-    request.mutate(parsed.data);
-  }
+  const submit = form.handleSubmit((values) => request.mutate(values, { onError: (e) => setServerErrors(form, e) }));
 
   if (request.isSuccess)
     return (
@@ -44,7 +35,7 @@ export default function ForgotPassword() {
             {error.message}
           </Notice>
         ) : null}
-        <TextField label="E-mail" type="email" name="email" inputMode="email" autoComplete="username" value={email} onChange={(e) => setEmail(e.target.value)} error={fieldError} />
+        <TextField label="E-mail" type="email" inputMode="email" autoComplete="username" {...form.register("email")} error={fieldError} />
         <Button type="submit" busy={request.isPending} className="mt-2 w-full">
           Send me a link
         </Button>

@@ -39,10 +39,9 @@ export default function ResetPassword() {
   return (
     <PublicFrame title="Choose a new password" lead="Type it twice. Once it is saved, every other sign-in of your account ends.">
       <NewPasswordForm
-        token={token}
         submitLabel="Save the new password"
         busy={confirm.isPending}
-        serverFields={isApiError(error) ? error.fields : {}}
+        error={error}
         serverError={error && !Object.keys(isApiError(error) ? error.fields : {}).length ? error.message : undefined}
         onSubmit={(password) => confirm.mutate({ token, password })}
       />

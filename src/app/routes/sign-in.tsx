@@ -1,11 +1,12 @@
-import { useState, type FormEvent } from "react";
 import { Link, Navigate, useNavigate, useSearchParams } from "react-router";
 import { useSession, useSignIn } from "../../lib/auth.ts";
 import { isApiError } from "../../lib/api-client.ts";
 import { TextField } from "../../components/form/Field.tsx";
+import { setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { Wordmark } from "../../components/ui/Page.tsx";
+import { signInSchema } from "../../../shared/schemas/auth.ts";
 
 /** Only same-site paths under /app are followed after sign-in, never an outside address. */
 const safeNext = (next: string | null) => (next && next.startsWith("/app") && !next.startsWith("//") ? next : "/app");
@@ -15,8 +16,8 @@ export default function SignIn() {
   const navigate = useNavigate();
   const session = useSession();
   const signIn = useSignIn();
-  const [email, setEmail] = useState("");
-  const [password, setPassword] = useState("");
+  const form = useZodForm(signInSchema, { defaultValues: { email: "", password: "" } });
+  const { errors } = form.formState;
   const next = safeNext(params.get("next"));
 
   if (session.data?.user) return <Navigate to={next} replace />;
@@ -24,10 +25,9 @@ export default function SignIn() {
   const error = signIn.error;
   const fields = isApiError(error) ? error.fields : {};
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    signIn.mutate({ email, password }, { onSuccess: () => navigate(next, { replace: true }) });
-  }
+  const submit = form.handleSubmit((values) =>
+    signIn.mutate(values, { onSuccess: () => navigate(next, { replace: true }), onError: (e) => setServerErrors(form, e) }),
+  );
 
   return (
     <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center px-5 py-10">
@@ -43,23 +43,19 @@ export default function SignIn() {
         <TextField
           label="E-mail"
           type="email"
-          name="email"
           autoComplete="username"
           inputMode="email"
           required
-          value={email}
-          onChange={(e) => setEmail(e.target.value)}
-          error={fields.email}
+          {...form.register("email")}
+          error={errors.email?.message}
         />
         <TextField
           label="Password"
           type="password"
-          name="password"
           autoComplete="current-password"
           required
-          value={password}
-          onChange={(e) => setPassword(e.target.value)}
-          error={fields.password}
+          {...form.register("password")}
+          error={errors.password?.message}
         />
         <Button type="submit" busy={signIn.isPending} className="mt-2 w-full">
           Sign in

@@ -1,4 +1,4 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from "react";
+import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes, type TextareaHTMLAttributes } from "react";
 
 interface FieldFrame {
   label: ReactNode;
@@ -6,6 +6,9 @@ interface FieldFrame {
   hint?: ReactNode;
   after?: ReactNode;
 }
+
+/** React 19 passes `ref` as a prop, so react-hook-form's `register()` spreads straight onto these fields. */
+type WithRef<E> = { ref?: Ref<E> };
 
 const control =
   "w-full rounded-md border bg-paper-raised px-3 py-2 text-base text-ink placeholder:text-ink-faint min-h-11 aria-[invalid=true]:border-brick aria-[invalid=true]:bg-brick-wash/40 border-line-strong focus:border-signal";
@@ -37,7 +40,7 @@ function Frame({ id, label, error, hint, after, children }: FieldFrame & { id: s
 const describedBy = (id: string, error?: string, hint?: ReactNode) =>
   [error ? `${id}-error` : null, hint && !error ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
 
-export function TextField({ label, error, hint, after, className = "", ...rest }: FieldFrame & InputHTMLAttributes<HTMLInputElement>) {
+export function TextField({ label, error, hint, after, className = "", ...rest }: FieldFrame & InputHTMLAttributes<HTMLInputElement> & WithRef<HTMLInputElement>) {
   const auto = useId();
   const id = rest.id ?? auto;
   return (
@@ -47,7 +50,7 @@ export function TextField({ label, error, hint, after, className = "", ...rest }
   );
 }
 
-export function SelectField({ label, error, hint, children, className = "", ...rest }: FieldFrame & SelectHTMLAttributes<HTMLSelectElement>) {
+export function SelectField({ label, error, hint, children, className = "", ...rest }: FieldFrame & SelectHTMLAttributes<HTMLSelectElement> & WithRef<HTMLSelectElement>) {
   const auto = useId();
   const id = rest.id ?? auto;
   return (
@@ -59,7 +62,7 @@ export function SelectField({ label, error, hint, children, className = "", ...r
   );
 }
 
-export function TextAreaField({ label, error, hint, className = "", ...rest }: FieldFrame & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+export function TextAreaField({ label, error, hint, className = "", ...rest }: FieldFrame & TextareaHTMLAttributes<HTMLTextAreaElement> & WithRef<HTMLTextAreaElement>) {
   const auto = useId();
   const id = rest.id ?? auto;
   return (
@@ -69,7 +72,7 @@ export function TextAreaField({ label, error, hint, className = "", ...rest }: F
   );
 }
 
-export function CheckboxField({ label, error, ...rest }: { label: ReactNode; error?: string } & InputHTMLAttributes<HTMLInputElement>) {
+export function CheckboxField({ label, error, ...rest }: { label: ReactNode; error?: string } & InputHTMLAttributes<HTMLInputElement> & WithRef<HTMLInputElement>) {
   const auto = useId();
   const id = rest.id ?? auto;
   return (

@@ -1,40 +1,36 @@
-import { useState, type FormEvent } from "react";
+import { useState } from "react";
 import { useInvite } from "./api/accounts.ts";
 import { isApiError } from "../../lib/api-client.ts";
 import { SelectField, TextField } from "../../components/form/Field.tsx";
+import { setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { ROLES, ROLE_LABELS, type Role } from "../../../shared/constants/roles.ts";
 import { inviteSchema } from "../../../shared/schemas/enquiries.ts";
-import { zodFields } from "../../../shared/schemas/fields.ts";
 
 const blank = { email: "", name: "", role: "sales" as Role };
 
 /** An admin invites a colleague by e-mail; they choose their own password from the link. */
 export function InviteForm() {
   const invite = useInvite();
-  const [form, setForm] = useState(blank);
-  const [clientFields, setClientFields] = useState<Record<string, string>>({});
+  const form = useZodForm(inviteSchema, { defaultValues: blank });
+  const { errors } = form.formState;
   const [sent, setSent] = useState<string | null>(null);
   const error = invite.error;
-  const fields = { ...(isApiError(error) ? error.fields : {}), ...clientFields };
-  const set = (key: keyof typeof blank) => (e: { target: { value: string } }) => {
-    setForm({ ...form, [key]: e.target.value });
-    setSent(null);
-  };
+  const fields = isApiError(error) ? error.fields : {};
+  // Typing again means the last "sent" is no longer news.
+  const field = (key: keyof typeof blank) => form.register(key, { onChange: () => setSent(null) });
+  const role = form.watch("role") as Role;
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    const parsed = inviteSchema.safeParse(form);
-    if (!parsed.success) return setClientFields(zodFields(parsed.error));
-    setClientFields({});
-    invite.mutate(parsed.data, {
+  const submit = form.handleSubmit((values) =>
+    invite.mutate(values, {
       onSuccess: ({ invited }) => {
         setSent(invited);
-        setForm(blank);
+        form.reset(blank);
       },
-    });
-  }
+      onError: (e) => setServerErrors(form, e),
+    }),
+  );
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="Invite a staff member">
@@ -50,9 +46,9 @@ export function InviteForm() {
           <Notice tone="danger" title="No invitation sent">{error.message}</Notice>
         </div>
       ) : null}
-      <TextField label="Name" name="name" value={form.name} onChange={set("name")} error={fields.name} autoComplete="off" />
-      <TextField label="E-mail" name="email" type="email" inputMode="email" value={form.email} onChange={set("email")} error={fields.email} autoComplete="off" />
-      <SelectField label="Role" name="role" value={form.role} onChange={set("role")} error={fields.role} hint={ROLE_LABELS[form.role].summary}>
+      <TextField label="Name" {...field("name")} error={errors.name?.message} autoComplete="off" />
+      <TextField label="E-mail" type="email" inputMode="email" {...field("email")} error={errors.email?.message} autoComplete="off" />
+      <SelectField label="Role" {...field("role")} error={errors.role?.message} hint={ROLE_LABELS[role].summary}>
         {ROLES.map((r) => (
           <option key={r} value={r}>
             {ROLE_LABELS[r].label}

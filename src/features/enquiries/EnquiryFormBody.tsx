@@ -1,21 +1,15 @@
-import { useEffect, useId, useRef, useState, type FormEvent } from "react";
+import { useEffect, useId, useRef, useState } from "react";
+import { useForm, type FieldErrors, type Resolver } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useSubmitEnquiry } from "./api.ts";
 import { isApiError } from "../../lib/api-client.ts";
 import { CheckboxField, TextAreaField, TextField } from "../../components/form/Field.tsx";
+import { flatErrors, setServerErrors } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
-import { enquirySchema } from "../../../shared/schemas/enquiries.ts";
-import { zodFields } from "../../../shared/schemas/fields.ts";
+import { enquirySchema, type EnquiryInput } from "../../../shared/schemas/enquiries.ts";
 import { CONTACT_LABELS, CONTACT_PREFERENCES } from "../../../shared/constants/leads.ts";
-
-export interface EnquiryFormProps {
-  slug: string;
-  /** The revision number the buyer is reading; the lead records it. */
-  revision: number;
-  vehicleTitle: string;
-  stockNumber: string;
-  dealership: { name: string; phone: string; email: string };
-}
+import type { EnquiryFormProps } from "./EnquiryForm.tsx";
 
 type Preference = (typeof CONTACT_PREFERENCES)[number];
 
@@ -25,10 +19,7 @@ const blank = {
   phone: "",
   message: "",
   preferredContact: "either" as Preference,
-  make: "",
-  model: "",
-  year: "",
-  odometerKm: "",
+  tradeIn: { make: "", model: "", year: "", odometerKm: "" },
   consent: false,
   website: "",
 };
@@ -46,13 +37,14 @@ const wholeNumber = (s: string) => {
 function toBody(v: Values, startedAt: number, revision: number, tradeInOpen: boolean) {
   const pre: Record<string, string> = {};
   let tradeIn = null as null | { make: string; model: string; year: number | null; odometerKm: number | null };
-  if (tradeInOpen && (v.make.trim() || v.model.trim() || v.year.trim() || v.odometerKm.trim())) {
-    const year = v.year.trim() ? wholeNumber(v.year) : null;
-    const km = v.odometerKm.trim() ? wholeNumber(v.odometerKm) : null;
-    if (v.year.trim() && year === null) pre["tradeIn.year"] = "Write the year in figures, like 2014.";
-    if (v.odometerKm.trim() && km === null) pre["tradeIn.odometerKm"] = "Write the distance in whole kilometres, like 150000.";
-    if (!v.make.trim() && !v.model.trim()) pre["tradeIn.make"] = "Tell us at least the make or the model, or close this part.";
-    tradeIn = { make: v.make, model: v.model, year, odometerKm: km };
+  const t = v.tradeIn;
+  if (tradeInOpen && (t.make.trim() || t.model.trim() || t.year.trim() || t.odometerKm.trim())) {
+    const year = t.year.trim() ? wholeNumber(t.year) : null;
+    const km = t.odometerKm.trim() ? wholeNumber(t.odometerKm) : null;
+    if (t.year.trim() && year === null) pre["tradeIn.year"] = "Write the year in figures, like 2014.";
+    if (t.odometerKm.trim() && km === null) pre["tradeIn.odometerKm"] = "Write the distance in whole kilometres, like 150000.";
+    if (!t.make.trim() && !t.model.trim()) pre["tradeIn.make"] = "Tell us at least the make or the model, or close this part.";
+    tradeIn = { make: t.make, model: t.model, year, odometerKm: km };
   }
   const body = {
     name: v.name,
@@ -75,18 +67,46 @@ const FIELD_FALLBACK: Record<string, string> = {
   "tradeIn.odometerKm": "Give a distance between 0 and 2,000,000 km.",
 };
 
+const check = zodResolver(enquirySchema);
+
+/**
+ * The schema's check of the body, with the number checks made before it (they win over zod's wording). The paths
+ * of both name the inputs: `tradeIn.year` is the year's input.
+ */
+const enquiryResolver =
+  (context: { startedAt: () => number; revision: number; tradeInOpen: () => boolean }): Resolver<Values, unknown, EnquiryInput> =>
+  async (values, ctx, options) => {
+    const { body, pre } = toBody(values, context.startedAt(), context.revision, context.tradeInOpen());
+    const result = await check(body as never, ctx, options as never);
+    if (!Object.keys(pre).length) return result as never;
+    const errors: FieldErrors<Values> = { ...result.errors } as never;
+    for (const [path, message] of Object.entries(pre)) {
+      const [head, leaf] = path.split(".") as ["tradeIn", keyof Values["tradeIn"]];
+      errors[head] = { ...(errors[head] ?? {}), [leaf]: { type: "custom", message } } as never;
+    }
+    return { values: {}, errors };
+  };
+
 /**
  * The buyer's question about one vehicle, phone first. Every problem is shown at once, before and after sending;
  * what was typed is never cleared by an error. Public bundle: imports only shared/, src/lib and src/components.
  */
-export function EnquiryForm({ slug, revision, vehicleTitle, stockNumber, dealership }: EnquiryFormProps) {
+export default function EnquiryFormBody({ slug, revision, vehicleTitle, stockNumber, dealership }: EnquiryFormProps) {
   const uid = useId();
   const submit = useSubmitEnquiry(slug);
-  const [values, setValues] = useState<Values>(blank);
   const [tradeInOpen, setTradeInOpen] = useState(false);
-  const [clientFields, setClientFields] = useState<Record<string, string>>({});
   const [sentNext, setSentNext] = useState<string | null>(null);
   const startedAt = useRef(0);
+  const tradeInOpenNow = useRef(tradeInOpen);
+  tradeInOpenNow.current = tradeInOpen;
+  const form = useForm<Values, unknown, EnquiryInput>({
+    defaultValues: blank,
+    resolver: enquiryResolver({ startedAt: () => startedAt.current || Date.now(), revision, tradeInOpen: () => tradeInOpenNow.current }),
+    // Checked on send only; the buyer's corrections clear their own field (below).
+    mode: "onSubmit",
+    reValidateMode: "onSubmit",
+    shouldFocusError: false,
+  });
   const formRef = useRef<HTMLFormElement>(null);
   const thanksRef = useRef<HTMLDivElement>(null);
   const [focusTick, setFocusTick] = useState(0);
@@ -108,55 +128,44 @@ export function EnquiryForm({ slug, revision, vehicleTitle, stockNumber, dealers
 
   const error = submit.error;
   const serverFields = isApiError(error) && error.status === 400 ? error.fields : {};
-  const fields = { ...serverFields, ...clientFields };
+  const fields = flatErrors(form.formState.errors);
   const msg = (key: string) => (fields[key] ? (fields[key].startsWith("Invalid input") || fields[key].startsWith("Too ") ? FIELD_FALLBACK[key] ?? fields[key] : fields[key]) : undefined);
   const count = Object.keys(fields).length;
 
-  const set = <K extends keyof Values>(key: K, value: Values[K]) => {
-    setValues((v) => ({ ...v, [key]: value }));
-    // A field the buyer has just corrected stops shouting; the rest stay until the next send.
-    setClientFields((f) => {
-      const rest: Record<string, string> = { ...f };
-      delete rest[key];
-      if (key === "email" || key === "phone") delete rest[key === "email" ? "phone" : "email"];
-      return rest;
-    });
-  };
-  const text = (key: keyof Values) => (e: { target: { value: string } }) => set(key, e.target.value as never);
+  // A field the buyer has just corrected stops shouting; the rest stay until the next send.
+  const field = (name: Parameters<typeof form.register>[0]) =>
+    form.register(name, { onChange: () => form.clearErrors(name === "email" || name === "phone" ? ["email", "phone"] : name) });
 
-  function onSubmit(e: FormEvent) {
-    e.preventDefault();
-    if (submit.isPending) return;
-    const { body, pre } = toBody(values, startedAt.current || Date.now(), revision, tradeInOpen);
-    const parsed = enquirySchema.safeParse(body);
-    const all = { ...(parsed.success ? {} : zodFields(parsed.error)), ...pre };
-    if (Object.keys(all).length) {
+  const onSubmit = form.handleSubmit(
+    (body) =>
+      submit.mutate(body, {
+        onSuccess: (res) => setSentNext(res.next),
+        onError: (e) => {
+          if (isApiError(e) && e.status === 400) setServerErrors(form, e);
+          setFocusTick((n) => n + 1);
+        },
+      }),
+    () => {
       submit.reset();
-      setClientFields(all);
       setFocusTick((n) => n + 1);
-      return;
-    }
-    setClientFields({});
-    submit.mutate(parsed.data!, {
-      onSuccess: (res) => setSentNext(res.next),
-      onError: () => setFocusTick((n) => n + 1),
-    });
-  }
+    },
+  );
 
   function another() {
     // Keep who they are; a new question starts empty and needs the buyer's consent again.
-    setValues((v) => ({ ...blank, name: v.name, email: v.email, phone: v.phone, preferredContact: v.preferredContact }));
+    const v = form.getValues();
+    form.reset({ ...blank, name: v.name, email: v.email, phone: v.phone, preferredContact: v.preferredContact });
     setTradeInOpen(false);
-    setClientFields({});
     submit.reset();
     setSentNext(null);
     startedAt.current = Date.now();
   }
 
+  const name = form.getValues("name");
   if (sentNext !== null)
     return (
       <div ref={thanksRef} tabIndex={-1} className="rounded-lg border border-signal bg-signal-wash px-5 py-6 outline-none" role="status" aria-live="polite">
-        <h3 className="text-xl font-bold">Thank you{values.name.trim() ? `, ${values.name.trim().split(/\s+/)[0]}` : ""}. Your question is with us.</h3>
+        <h3 className="text-xl font-bold">Thank you{name.trim() ? `, ${name.trim().split(/\s+/)[0]}` : ""}. Your question is with us.</h3>
         <p className="mt-2">
           About the <strong>{vehicleTitle}</strong> <span className="text-ink-soft">(stock number <span className="font-mono">{stockNumber}</span>)</span>.
         </p>
@@ -189,7 +198,7 @@ export function EnquiryForm({ slug, revision, vehicleTitle, stockNumber, dealers
       : null;
 
   return (
-    <form ref={formRef} onSubmit={onSubmit} noValidate aria-label={`Ask about the ${vehicleTitle}`} className="flex flex-col gap-5">
+    <form ref={formRef} onSubmit={(e) => (submit.isPending ? e.preventDefault() : void onSubmit(e))} noValidate aria-label={`Ask about the ${vehicleTitle}`} className="flex flex-col gap-5">
       {general ? (
         <Notice tone={error?.status === 429 ? "caution" : "danger"} title={general.title} role="alert">
           {general.body}
@@ -200,20 +209,18 @@ export function EnquiryForm({ slug, revision, vehicleTitle, stockNumber, dealers
         </Notice>
       ) : null}
 
-      <TextField label="Your name" name="name" autoComplete="name" value={values.name} onChange={text("name")} error={msg("name")} />
+      <TextField label="Your name" autoComplete="name" {...field("name")} error={msg("name")} />
 
       <fieldset className="flex flex-col gap-4 rounded-lg border border-line p-4">
         <legend className="px-1 text-sm font-bold">How can we reach you?</legend>
         <p className="-mt-1 text-sm text-ink-soft">Give at least one: an e-mail address, a phone number, or both.</p>
-        <TextField label="E-mail" name="email" type="email" inputMode="email" autoComplete="email" value={values.email} onChange={text("email")} error={msg("email")} />
-        <TextField label="Phone" name="phone" type="tel" inputMode="tel" autoComplete="tel" value={values.phone} onChange={text("phone")} error={msg("phone")} />
+        <TextField label="E-mail" type="email" inputMode="email" autoComplete="email" {...field("email")} error={msg("email")} />
+        <TextField label="Phone" type="tel" inputMode="tel" autoComplete="tel" {...field("phone")} error={msg("phone")} />
       </fieldset>
 
       <TextAreaField
         label="Your question"
-        name="message"
-        value={values.message}
-        onChange={text("message")}
+        {...field("message")}
         error={msg("message")}
         hint="For example: can I see it on Saturday, is the price open to a trade-in, has the timing belt been changed."
         rows={5}
@@ -224,7 +231,7 @@ export function EnquiryForm({ slug, revision, vehicleTitle, stockNumber, dealers
         <div className="flex flex-col gap-1 sm:flex-row sm:gap-6">
           {CONTACT_PREFERENCES.map((p) => (
             <label key={p} className="flex min-h-11 items-center gap-3 text-base">
-              <input type="radio" name="preferredContact" value={p} checked={values.preferredContact === p} onChange={() => set("preferredContact", p)} className="size-5 accent-signal" />
+              <input type="radio" {...field("preferredContact")} value={p} className="size-5 accent-signal" />
               <span>
                 {CONTACT_LABELS[p]} <span className="text-sm text-ink-soft">— {CONTACT_HINTS[p]}</span>
               </span>
@@ -255,15 +262,13 @@ export function EnquiryForm({ slug, revision, vehicleTitle, stockNumber, dealers
         </button>
         {tradeInOpen ? (
           <div id={`${uid}-tradein`} className="grid grid-cols-1 gap-4 border-t border-line px-4 py-4 sm:grid-cols-2">
-            <TextField label="Make" name="tradeIn.make" value={values.make} onChange={text("make")} error={msg("tradeIn.make")} autoComplete="off" />
-            <TextField label="Model" name="tradeIn.model" value={values.model} onChange={text("model")} error={msg("tradeIn.model")} autoComplete="off" />
-            <TextField label="Year" name="tradeIn.year" inputMode="numeric" value={values.year} onChange={text("year")} error={msg("tradeIn.year")} autoComplete="off" />
+            <TextField label="Make" {...field("tradeIn.make")} error={msg("tradeIn.make")} autoComplete="off" />
+            <TextField label="Model" {...field("tradeIn.model")} error={msg("tradeIn.model")} autoComplete="off" />
+            <TextField label="Year" inputMode="numeric" {...field("tradeIn.year")} error={msg("tradeIn.year")} autoComplete="off" />
             <TextField
               label="Odometer"
-              name="tradeIn.odometerKm"
               inputMode="numeric"
-              value={values.odometerKm}
-              onChange={text("odometerKm")}
+              {...field("tradeIn.odometerKm")}
               error={msg("tradeIn.odometerKm")}
               after={<span className="unit">km</span>}
               autoComplete="off"
@@ -275,13 +280,11 @@ export function EnquiryForm({ slug, revision, vehicleTitle, stockNumber, dealers
       {/* For scripts only: people never see this field, and the server discards anything that fills it. */}
       <div aria-hidden="true" className="absolute -left-[10000px] top-auto size-px overflow-hidden">
         <label htmlFor={`${uid}-website`}>Leave this field empty</label>
-        <input id={`${uid}-website`} type="text" name="website" tabIndex={-1} autoComplete="off" value={values.website} onChange={text("website")} />
+        <input id={`${uid}-website`} type="text" tabIndex={-1} autoComplete="off" {...form.register("website")} />
       </div>
 
       <CheckboxField
-        name="consent"
-        checked={values.consent}
-        onChange={(e) => set("consent", e.target.checked)}
+        {...field("consent")}
         error={msg("consent")}
         label="You may contact me about this vehicle. My details are used for this enquiry only."
       />

@@ -1,9 +1,9 @@
-import { useState, type FormEvent } from "react";
+import { useRef, type FormEvent } from "react";
 import { createFeedSchema, DEFAULT_COLUMNS, FEED_FORMATS, FEED_FORMAT_LABELS, FEED_STATUSES, FORMATS_WITH_COLUMNS, takesWidth, type FeedFormat } from "../../../../shared/schemas/feeds.ts";
-import { zodFields } from "../../../../shared/schemas/fields.ts";
 import { BODY_TYPES, FUEL_TYPES, LABELS } from "../../../../shared/constants/vehicle.ts";
 import { isApiError } from "../../../lib/api-client.ts";
 import { SelectField, TextField } from "../../../components/form/Field.tsx";
+import { flatErrors, setServerErrors, useZodFormAsTyped } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { useCreateFeed, usePreviewFeed } from "../api/feeds.ts";
@@ -65,70 +65,79 @@ function Checkboxes({ legend, options, value, onChange }: { legend: string; opti
 }
 
 export function FeedForm({ onCreated }: { onCreated: (url: string) => void }) {
-  const [draft, setDraft] = useState<Draft>(defaults);
-  const [local, setLocal] = useState<Record<string, string>>({});
+  // A preview needs no name yet; the same schema checks everything else.
+  const purpose = useRef<"preview" | "save">("save");
+  const form = useZodFormAsTyped<Draft, typeof createFeedSchema>(
+    createFeedSchema,
+    (d) => {
+      const body = toBody(d);
+      return purpose.current === "preview" ? { ...body, name: body.name || "preview" } : body;
+    },
+    { defaultValues: defaults() },
+  );
   const create = useCreateFeed();
   const preview = usePreviewFeed();
   const serverFields = isApiError(create.error) ? create.error.fields : isApiError(preview.error) ? preview.error.fields : {};
-  const fields = { ...serverFields, ...local };
-  const set = <K extends keyof Draft>(k: K, v: Draft[K]) => setDraft((d) => ({ ...d, [k]: v }));
+  const fields = flatErrors(form.formState.errors);
+  const draft = form.watch();
+  const set = <K extends keyof Draft>(k: K, v: Draft[K]) => form.setValue(k, v as never);
   const withColumns = FORMATS_WITH_COLUMNS.includes(draft.format);
 
-  function check(requireName: boolean) {
-    const body = toBody(draft);
-    const parsed = createFeedSchema.safeParse(requireName ? body : { ...body, name: body.name || "preview" });
-    const errs = parsed.success ? {} : zodFields(parsed.error);
-    setLocal(errs);
-    return Object.keys(errs).length ? null : body;
-  }
+  // The body as built from what was typed, as before: the schema's output (with its defaults) is only the check.
+  const sendPreview = form.handleSubmit(() => {
+    const body = toBody(form.getValues());
+    preview.mutate({ ...body, name: body.name || undefined, limit: 10 } as never, { onError: (e) => setServerErrors(form, e) });
+  });
+  const sendCreate = form.handleSubmit(() =>
+    create.mutate(toBody(form.getValues()) as never, {
+      onSuccess: ({ url }) => {
+        onCreated(url);
+        form.reset(defaults());
+        preview.reset();
+      },
+      onError: (e) => setServerErrors(form, e),
+    }),
+  );
 
   function runPreview() {
-    const body = check(false);
-    if (body) preview.mutate({ ...body, name: body.name || undefined, limit: 10 } as never);
+    purpose.current = "preview";
+    void sendPreview();
   }
 
   function submit(e: FormEvent) {
-    e.preventDefault();
-    const body = check(true);
-    if (!body) return;
-    create.mutate(body as never, {
-      onSuccess: ({ url }) => {
-        onCreated(url);
-        setDraft(defaults());
-        preview.reset();
-      },
-    });
+    purpose.current = "save";
+    void sendCreate(e);
   }
 
   return (
     <form onSubmit={submit} noValidate aria-label="Create a feed" className="flex flex-col gap-5">
       {(create.error || preview.error) && !Object.keys(serverFields).length ? <Notice tone="danger" title={(create.error ?? preview.error)!.message} /> : null}
       <div className="grid gap-4 md:grid-cols-3">
-        <TextField label="Name" value={draft.name} onChange={(e) => set("name", e.target.value)} error={fields.name} hint="Who it is for, e.g. the portal's name." />
-        <SelectField label="Format" value={draft.format} onChange={(e) => set("format", e.target.value as FeedFormat)} error={fields.format}>
+        <TextField label="Name" {...form.register("name")} error={fields.name} hint="Who it is for, e.g. the portal's name." />
+        <SelectField label="Format" {...form.register("format")} error={fields.format}>
           {FEED_FORMATS.map((f) => (
             <option key={f} value={f}>
               {FEED_FORMAT_LABELS[f]}
             </option>
           ))}
         </SelectField>
-        <SelectField label="Units" value={draft.units} onChange={(e) => set("units", e.target.value as Draft["units"])} hint="Odometer, range and fuel use.">
+        <SelectField label="Units" {...form.register("units")} hint="Odometer, range and fuel use.">
           <option value="market">The market's units</option>
           <option value="metric">Metric</option>
         </SelectField>
       </div>
       <div className="grid gap-4 md:grid-cols-2">
         <Checkboxes legend="Statuses" options={FEED_STATUSES.map((s) => [s, LABELS.status[s]] as const)} value={draft.statuses} onChange={(v) => set("statuses", v)} />
-        <TextField label="Makes" value={draft.makes} onChange={(e) => set("makes", e.target.value)} hint="Separate with commas; empty for every make." error={fields["filter.makes"]} />
+        <TextField label="Makes" {...form.register("makes")} hint="Separate with commas; empty for every make." error={fields["filter.makes"]} />
         <Checkboxes legend="Body types" options={BODY_TYPES.map((b) => [b, LABELS.bodyType[b]] as const)} value={draft.bodyTypes} onChange={(v) => set("bodyTypes", v)} />
         <Checkboxes legend="Fuel" options={FUEL_TYPES.map((f) => [f, LABELS.fuelType[f]] as const)} value={draft.fuelTypes} onChange={(v) => set("fuelTypes", v)} />
       </div>
       {fields["filter.statuses"] ? <p className="text-sm font-bold text-brick">{fields["filter.statuses"]}</p> : null}
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
-        <TextField label="Lowest price" inputMode="decimal" value={draft.priceMin} onChange={(e) => set("priceMin", e.target.value)} error={fields["filter.priceMinCents"]} />
-        <TextField label="Highest price" inputMode="decimal" value={draft.priceMax} onChange={(e) => set("priceMax", e.target.value)} error={fields["filter.priceMaxCents"]} />
-        <TextField label="Fewest days in stock" inputMode="numeric" value={draft.daysMin} onChange={(e) => set("daysMin", e.target.value)} error={fields["filter.daysInStockMin"]} />
-        <TextField label="Most days in stock" inputMode="numeric" value={draft.daysMax} onChange={(e) => set("daysMax", e.target.value)} error={fields["filter.daysInStockMax"]} />
+        <TextField label="Lowest price" inputMode="decimal" {...form.register("priceMin")} error={fields["filter.priceMinCents"]} />
+        <TextField label="Highest price" inputMode="decimal" {...form.register("priceMax")} error={fields["filter.priceMaxCents"]} />
+        <TextField label="Fewest days in stock" inputMode="numeric" {...form.register("daysMin")} error={fields["filter.daysInStockMin"]} />
+        <TextField label="Most days in stock" inputMode="numeric" {...form.register("daysMax")} error={fields["filter.daysInStockMax"]} />
       </div>
       {withColumns ? (
         <ColumnPicker value={draft.columns} onChange={(c) => set("columns", c)} errors={fields} />

@@ -1,35 +1,33 @@
-import { useState, type FormEvent } from "react";
+import { useState } from "react";
 import { useReplyToLead, type LeadDetail } from "../api/leads.ts";
-import { isApiError } from "../../../lib/api-client.ts";
 import { TextAreaField } from "../../../components/form/Field.tsx";
+import { setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { leadMessageSchema } from "../../../../shared/schemas/enquiries.ts";
-import { zodFields } from "../../../../shared/schemas/fields.ts";
 
 /** A reply by e-mail from the dealership's address; it is kept in the conversation with its delivery state. */
 export function ReplyForm({ lead }: { lead: LeadDetail }) {
   const reply = useReplyToLead(lead.id);
-  const [body, setBody] = useState("");
-  const [clientError, setClientError] = useState<string | null>(null);
+  const form = useZodForm(leadMessageSchema, { defaultValues: { body: "" } });
   const [sent, setSent] = useState(false);
   const noEmail = !lead.email;
   const error = reply.error;
-  const fieldError = clientError ?? (isApiError(error) ? error.fields.body : undefined);
+  const fieldError = form.formState.errors.body?.message;
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    setSent(false);
-    const parsed = leadMessageSchema.safeParse({ body });
-    if (!parsed.success) return setClientError(zodFields(parsed.error).body ?? "Write the message.");
-    setClientError(null);
-    reply.mutate(parsed.data, {
-      onSuccess: () => {
-        setBody("");
-        setSent(true);
-      },
-    });
-  }
+  const submit = form.handleSubmit(
+    (values) => {
+      setSent(false);
+      reply.mutate(values, {
+        onSuccess: () => {
+          form.reset({ body: "" });
+          setSent(true);
+        },
+        onError: (e) => setServerErrors(form, e),
+      });
+    },
+    () => setSent(false),
+  );
 
   if (noEmail)
     return (
@@ -52,12 +50,7 @@ export function ReplyForm({ lead }: { lead: LeadDetail }) {
       {error && !fieldError ? <Notice tone="danger" title="The reply was not sent">{error.message} Your text is still here.</Notice> : null}
       <TextAreaField
         label={`Your reply to ${lead.name}`}
-        name="reply"
-        value={body}
-        onChange={(e) => {
-          setBody(e.target.value);
-          setSent(false);
-        }}
+        {...form.register("body", { onChange: () => setSent(false) })}
         error={fieldError}
         hint={<>Goes to <span className="font-mono">{lead.email}</span> with a link to the condition page.</>}
         rows={6}

@@ -1,39 +1,34 @@
-import { useState, type FormEvent } from "react";
+import { useState } from "react";
 import { useShareVehicle } from "../api/leads.ts";
 import { isApiError } from "../../../lib/api-client.ts";
 import { TextAreaField, TextField } from "../../../components/form/Field.tsx";
+import { setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { shareVehicleSchema } from "../../../../shared/schemas/enquiries.ts";
-import { zodFields } from "../../../../shared/schemas/fields.ts";
 
 const blank = { email: "", name: "", message: "" };
 
 /** Sales send a buyer the condition page by e-mail. Only a published page can be sent. */
 export function ShareVehicle({ vehicleId, published }: { vehicleId: number; published: boolean }) {
   const share = useShareVehicle(vehicleId);
-  const [form, setForm] = useState(blank);
-  const [clientFields, setClientFields] = useState<Record<string, string>>({});
+  const form = useZodForm(shareVehicleSchema, { defaultValues: blank });
+  const { errors } = form.formState;
   const [done, setDone] = useState<string | null>(null);
   const error = share.error;
-  const fields = { ...(isApiError(error) ? error.fields : {}), ...clientFields };
-  const set = (key: keyof typeof blank) => (e: { target: { value: string } }) => {
-    setForm({ ...form, [key]: e.target.value });
-    setDone(null);
-  };
+  const fields = isApiError(error) ? error.fields : {};
+  // Typing again means the last "sent" is no longer news.
+  const field = (key: keyof typeof blank) => form.register(key, { onChange: () => setDone(null) });
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    const parsed = shareVehicleSchema.safeParse(form);
-    if (!parsed.success) return setClientFields(zodFields(parsed.error));
-    setClientFields({});
-    share.mutate(parsed.data, {
+  const submit = form.handleSubmit((values) =>
+    share.mutate(values, {
       onSuccess: () => {
-        setDone(`The condition page is on its way to ${parsed.data.email}.`);
-        setForm(blank);
+        setDone(`The condition page is on its way to ${values.email}.`);
+        form.reset(blank);
       },
-    });
-  }
+      onError: (e) => setServerErrors(form, e),
+    }),
+  );
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label="Send the condition page to a buyer">
@@ -45,9 +40,9 @@ export function ShareVehicle({ vehicleId, published }: { vehicleId: number; publ
       {done ? <Notice tone="success" title={done} /> : null}
       {error && !Object.keys(fields).length ? <Notice tone="danger" title="Not sent">{error.message} What you typed is still here.</Notice> : null}
       <fieldset disabled={!published || share.isPending} className="flex flex-col gap-4 disabled:opacity-70">
-        <TextField label="Buyer's e-mail" name="email" type="email" inputMode="email" autoComplete="off" value={form.email} onChange={set("email")} error={fields.email} />
-        <TextField label="Buyer's name (optional)" name="name" autoComplete="off" value={form.name} onChange={set("name")} error={fields.name} />
-        <TextAreaField label="A short message (optional)" name="message" value={form.message} onChange={set("message")} error={fields.message} rows={3} hint="Sent above the link, from the dealership's address." />
+        <TextField label="Buyer's e-mail" type="email" inputMode="email" autoComplete="off" {...field("email")} error={errors.email?.message} />
+        <TextField label="Buyer's name (optional)" autoComplete="off" {...field("name")} error={errors.name?.message} />
+        <TextAreaField label="A short message (optional)" {...field("message")} error={errors.message?.message} rows={3} hint="Sent above the link, from the dealership's address." />
         <Button type="submit" tone="secondary" busy={share.isPending} className="self-start">
           Send the condition page
         </Button>

@@ -1,12 +1,13 @@
-import { useState, type FormEvent } from "react";
+import { useState } from "react";
 import { useUpdateDealership, type DealershipView } from "../api/dealership.ts";
-import { isApiError } from "../../../lib/api-client.ts";
 import { CheckboxField, SelectField, TextAreaField, TextField } from "../../../components/form/Field.tsx";
+import { setServerErrors, useZodFormAsTyped } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { Panel } from "../../../components/ui/Page.tsx";
 import { MARKET_CODES, type MarketCode } from "../../../../shared/constants/market.ts";
 import { MARKETS } from "../../../../shared/domain/markets.ts";
+import { dealershipSettingsSchema } from "../../../../shared/schemas/dealership.ts";
 
 type Form = Record<string, string | boolean>;
 
@@ -19,46 +20,45 @@ const toForm = (d: DealershipView): Form => ({
   vinCheckDigitMandatory: d.vinCheckDigitMandatory,
 });
 
+/** The form as typed → the settings body: numbers parsed (empty means not given), against the version shown. */
+const toBody = (version: number) => (form: Form) => {
+  const body: Record<string, unknown> = { version };
+  for (const k of TEXT) body[k] = form[k];
+  for (const k of NUMBERS) body[k] = form[k] === "" ? null : Number(form[k]);
+  body.vinCheckDigitMandatory = form.vinCheckDigitMandatory;
+  return body;
+};
+
 export function SettingsForm({ dealership }: { dealership: DealershipView }) {
   const update = useUpdateDealership();
-  const [form, setForm] = useState<Form>(() => toForm(dealership));
+  const form = useZodFormAsTyped<Form, typeof dealershipSettingsSchema>(dealershipSettingsSchema, toBody(dealership.version), { defaultValues: toForm(dealership) });
+  const { errors } = form.formState;
   const [saved, setSaved] = useState(false);
-  const fields = isApiError(update.error) ? update.error.fields : {};
-  const text = (k: string) => ({
-    name: k,
-    value: String(form[k] ?? ""),
-    onChange: (e: { target: { value: string } }) => setForm({ ...form, [k]: e.target.value }),
-    error: fields[k],
-  });
+  const text = (k: string) => ({ ...form.register(k), error: errors[k]?.message });
 
   function applyMarket(code: MarketCode) {
     const p = MARKETS[code];
-    setForm({
-      ...form,
-      market: code,
-      distanceUnit: p.distanceUnit,
-      currency: p.currency,
-      legalMinTreadMm: String(p.legalMinimumTreadMm),
-      vinCheckDigitMandatory: p.vinCheckDigitMandatory,
-    });
+    form.setValue("distanceUnit", p.distanceUnit);
+    form.setValue("currency", p.currency);
+    form.setValue("legalMinTreadMm", String(p.legalMinimumTreadMm));
+    form.setValue("vinCheckDigitMandatory", p.vinCheckDigitMandatory);
   }
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    setSaved(false);
-    const body: Record<string, unknown> = { version: dealership.version };
-    for (const k of TEXT) body[k] = form[k];
-    for (const k of NUMBERS) body[k] = form[k] === "" ? null : Number(form[k]);
-    body.vinCheckDigitMandatory = form.vinCheckDigitMandatory;
-    update.mutate(body as never, {
-      onSuccess: ({ dealership: d }) => {
-        setForm(toForm(d));
-        setSaved(true);
-      },
-    });
-  }
+  const submit = form.handleSubmit(
+    (body) => {
+      setSaved(false);
+      update.mutate(body, {
+        onSuccess: ({ dealership: d }) => {
+          form.reset(toForm(d));
+          setSaved(true);
+        },
+        onError: (e) => setServerErrors(form, e),
+      });
+    },
+    () => setSaved(false),
+  );
 
-  const preset = MARKETS[form.market as MarketCode];
+  const preset = MARKETS[form.watch("market") as MarketCode];
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-6">
       {saved ? <Notice tone="success" title="Settings saved" /> : null}
@@ -82,7 +82,7 @@ export function SettingsForm({ dealership }: { dealership: DealershipView }) {
       </Panel>
       <Panel title="Market rules">
         <div className="grid gap-4 sm:grid-cols-2">
-          <SelectField label="Market" name="market" value={String(form.market)} onChange={(e) => applyMarket(e.target.value as MarketCode)} error={fields.market} hint={preset ? `Tread minimum from ${preset.treadSource.replace(/\s*\(TRADE\.md[^)]*\)/, "")}.` : undefined}>
+          <SelectField label="Market" {...form.register("market", { onChange: (e) => applyMarket(e.target.value as MarketCode) })} error={errors.market?.message} hint={preset ? `Tread minimum from ${preset.treadSource.replace(/\s*\(TRADE\.md[^)]*\)/, "")}.` : undefined}>
             {MARKET_CODES.map((m) => (
               <option key={m} value={m}>{MARKETS[m].name}</option>
             ))}
@@ -95,7 +95,7 @@ export function SettingsForm({ dealership }: { dealership: DealershipView }) {
           <TextField label="Legal minimum tread depth" inputMode="decimal" {...text("legalMinTreadMm")} after={<span className="unit">mm</span>} hint="Tyres below this fail the walk-around. Local law decides; check it." />
           <TextField label="New-tyre tread depth" inputMode="decimal" {...text("newTyreTreadMm")} after={<span className="unit">mm</span>} hint="Used to show remaining tread as a percentage." />
           <div className="self-end">
-            <CheckboxField label="A failed VIN check digit is an error (North American VINs)" checked={Boolean(form.vinCheckDigitMandatory)} onChange={(e) => setForm({ ...form, vinCheckDigitMandatory: e.target.checked })} />
+            <CheckboxField label="A failed VIN check digit is an error (North American VINs)" {...form.register("vinCheckDigitMandatory")} />
           </div>
           <TextField label="Service interval (distance)" inputMode="numeric" {...text("serviceIntervalKm")} after={<span className="unit">km</span>} />
           <TextField label="Service interval (time)" inputMode="numeric" {...text("serviceIntervalMonths")} after={<span className="unit">months</span>} />

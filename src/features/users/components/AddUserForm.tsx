@@ -1,30 +1,36 @@
-import { useState, type FormEvent } from "react";
+import { useState } from "react";
 import { useCreateUser } from "../api/users.ts";
 import { isApiError } from "../../../lib/api-client.ts";
 import { SelectField, TextField } from "../../../components/form/Field.tsx";
+import { setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { ROLES, ROLE_LABELS, type Role } from "../../../../shared/constants/roles.ts";
+import { createUserSchema } from "../../../../shared/schemas/users.ts";
 
 const empty = { email: "", name: "", role: "sales" as Role, password: "" };
 
 export function AddUserForm() {
   const create = useCreateUser();
-  const [form, setForm] = useState(empty);
+  const form = useZodForm(createUserSchema, { defaultValues: empty });
+  const { errors } = form.formState;
   const [added, setAdded] = useState<string | null>(null);
   const fields = isApiError(create.error) ? create.error.fields : {};
-  const set = (key: keyof typeof empty) => (e: { target: { value: string } }) => setForm({ ...form, [key]: e.target.value });
+  const role = form.watch("role") as Role;
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    setAdded(null);
-    create.mutate(form, {
-      onSuccess: ({ user }) => {
-        setAdded(`${user.name} can now sign in as ${ROLE_LABELS[user.role].label.toLowerCase()} with the password you set. Ask them to keep it private.`);
-        setForm(empty);
-      },
-    });
-  }
+  const submit = form.handleSubmit(
+    (values) => {
+      setAdded(null);
+      create.mutate(values, {
+        onSuccess: ({ user }) => {
+          setAdded(`${user.name} can now sign in as ${ROLE_LABELS[user.role].label.toLowerCase()} with the password you set. Ask them to keep it private.`);
+          form.reset(empty);
+        },
+        onError: (e) => setServerErrors(form, e),
+      });
+    },
+    () => setAdded(null),
+  );
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="Add a staff member">
@@ -40,9 +46,9 @@ export function AddUserForm() {
           <Notice tone="danger" title={create.error.message} />
         </div>
       ) : null}
-      <TextField label="Name" name="name" value={form.name} onChange={set("name")} error={fields.name} autoComplete="off" />
-      <TextField label="E-mail" name="email" type="email" value={form.email} onChange={set("email")} error={fields.email} autoComplete="off" />
-      <SelectField label="Role" name="role" value={form.role} onChange={set("role")} error={fields.role} hint={ROLE_LABELS[form.role].summary}>
+      <TextField label="Name" {...form.register("name")} error={errors.name?.message} autoComplete="off" />
+      <TextField label="E-mail" type="email" {...form.register("email")} error={errors.email?.message} autoComplete="off" />
+      <SelectField label="Role" {...form.register("role")} error={errors.role?.message} hint={ROLE_LABELS[role].summary}>
         {ROLES.map((r) => (
           <option key={r} value={r}>
             {ROLE_LABELS[r].label}
@@ -51,12 +57,10 @@ export function AddUserForm() {
       </SelectField>
       <TextField
         label="First password"
-        name="password"
         type="password"
         autoComplete="new-password"
-        value={form.password}
-        onChange={set("password")}
-        error={fields.password}
+        {...form.register("password")}
+        error={errors.password?.message}
         hint="At least 12 characters. Common passwords are refused."
       />
       <div className="sm:col-span-2">
