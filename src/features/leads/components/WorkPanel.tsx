@@ -1,9 +1,11 @@
-import { useState, type FormEvent } from "react";
+import { useMemo, useState } from "react";
+import { useForm } from "react-hook-form";
 import { useUpdateLead, type LeadDetail } from "../api/leads.ts";
 import { useQuery } from "@tanstack/react-query";
 import { isApiError } from "../../../lib/api-client.ts";
 import { usersQueryOptions } from "../../users/api/users.ts";
 import { SelectField, TextAreaField, TextField } from "../../../components/form/Field.tsx";
+import { setServerErrors } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { LEAD_STATUSES, LEAD_STATUS_LABELS, type LeadStatus } from "../../../../shared/constants/leads.ts";
@@ -12,11 +14,15 @@ import { can } from "../../../../shared/permissions.ts";
 import { useDealershipDay } from "../../settings/api/dealership.ts";
 import { followUpState } from "../format.ts";
 
-interface Edits {
-  status?: LeadStatus;
-  assigneeId?: string | null;
-  followUpOn?: string | null;
+/** What the form holds: the lead's fields as the inputs show them ("" for none), and the note being typed. */
+interface WorkValues {
+  status: LeadStatus;
+  assigneeId: string;
+  followUpOn: string;
+  note: string;
 }
+
+const fromLead = (lead: LeadDetail): WorkValues => ({ status: lead.status, assigneeId: lead.assigneeId ?? "", followUpOn: lead.followUpOn ?? "", note: "" });
 
 /** Admins may hand a lead to anyone who sells; the list is the admin-only staff list. */
 const useAssignable = (enabled: boolean) =>
@@ -32,27 +38,30 @@ const useAssignable = (enabled: boolean) =>
  */
 export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail; me: SessionUser; onReload: () => void; reloading: boolean }) {
   const update = useUpdateLead(lead.id);
-  const [edits, setEdits] = useState<Edits>({});
-  const [note, setNote] = useState("");
+  // The lead as loaded is the form's base; a newer lead (after a reload) replaces only what the person has not touched.
+  const base = useMemo(() => fromLead(lead), [lead]);
+  const form = useForm<WorkValues>({ values: base, resetOptions: { keepDirtyValues: true } });
+  const { errors } = form.formState;
+  const { status, assigneeId: assigneeText, followUpOn: followUpText, note } = form.watch();
   const [saved, setSaved] = useState<string | null>(null);
   const [pending, setPending] = useState<"take" | "save" | null>(null);
   const mayAssign = can(me, "leads.assign");
   const people = useAssignable(mayAssign);
   const today = useDealershipDay();
 
-  const status = edits.status ?? lead.status;
-  const assigneeId = edits.assigneeId !== undefined ? edits.assigneeId : lead.assigneeId;
-  const followUpOn = edits.followUpOn !== undefined ? edits.followUpOn : lead.followUpOn;
+  const assigneeId = assigneeText || null;
+  const followUpOn = followUpText || null;
   const changed = {
-    ...(edits.status !== undefined && edits.status !== lead.status ? { status: edits.status } : {}),
-    ...(edits.assigneeId !== undefined && edits.assigneeId !== lead.assigneeId ? { assigneeId: edits.assigneeId } : {}),
-    ...(edits.followUpOn !== undefined && edits.followUpOn !== lead.followUpOn ? { followUpOn: edits.followUpOn } : {}),
+    ...(status !== lead.status ? { status } : {}),
+    ...(assigneeId !== lead.assigneeId ? { assigneeId } : {}),
+    ...(followUpOn !== lead.followUpOn ? { followUpOn } : {}),
     ...(note.trim() ? { note: note.trim() } : {}),
   };
   const dirty = Object.keys(changed).length > 0;
   const error = update.error;
   const stale = isApiError(error) && error.status === 409;
   const fields = isApiError(error) ? error.fields : {};
+  const message = (k: keyof WorkValues) => errors[k]?.message;
 
   function save(input: typeof changed, done: string, kind: "take" | "save" = "save") {
     setSaved(null);
@@ -61,23 +70,20 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
       { version: lead.version, ...input },
       {
         onSuccess: () => {
-          setEdits((e) => {
-            const rest = { ...e };
-            for (const k of Object.keys(input)) delete rest[k as keyof Edits];
-            return rest;
-          });
-          if ("note" in input) setNote("");
+          // What was saved is now the lead's own value: no longer an edit to keep over a newer lead.
+          for (const k of Object.keys(input) as Array<keyof typeof input>)
+            if (k === "note") form.resetField("note", { defaultValue: "" });
+            else form.resetField(k, { defaultValue: input[k] ?? "" });
           setSaved(done);
         },
+        onError: (e) => setServerErrors(form, e),
       },
     );
   }
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    if (!dirty) return;
-    save(changed, "Saved.");
-  }
+  const submit = form.handleSubmit(() => {
+    if (dirty) save(changed, "Saved.");
+  });
 
   function reload() {
     update.reset();
@@ -102,7 +108,7 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
         <Notice tone="success" title={saved} />
       ) : null}
 
-      <SelectField label="Status" name="status" value={status} onChange={(e) => setEdits({ ...edits, status: e.target.value as LeadStatus })} error={fields.status}>
+      <SelectField label="Status" {...form.register("status")} error={message("status")}>
         {LEAD_STATUSES.map((s) => (
           <option key={s} value={s}>
             {LEAD_STATUS_LABELS[s]}
@@ -111,12 +117,12 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
       </SelectField>
 
       {mayAssign ? (
+        // Controlled: its options arrive with the staff list, after the form has its value.
         <SelectField
           label="Assigned to"
-          name="assigneeId"
-          value={assigneeId ?? ""}
-          onChange={(e) => setEdits({ ...edits, assigneeId: e.target.value || null })}
-          error={fields.assigneeId ?? (people.isError ? `The staff list could not be loaded: ${people.error.message}` : undefined)}
+          {...form.register("assigneeId")}
+          value={assigneeText}
+          error={message("assigneeId") ?? (people.isError ? `The staff list could not be loaded: ${people.error.message}` : undefined)}
         >
           <option value="">Nobody yet</option>
           {lead.assigneeId && !people.data?.some((u) => u.id === lead.assigneeId) ? <option value={lead.assigneeId}>{lead.assigneeName ?? "Current assignee"}</option> : null}
@@ -138,21 +144,19 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
               </Button>
             ) : null}
           </div>
-          {fields.assigneeId ? <p className="text-sm font-bold text-brick">{fields.assigneeId}</p> : null}
+          {message("assigneeId") ? <p className="text-sm font-bold text-brick">{message("assigneeId")}</p> : null}
         </div>
       )}
 
       <TextField
         label="Follow up on"
-        name="followUpOn"
         type="date"
-        value={followUpOn ?? ""}
-        onChange={(e) => setEdits({ ...edits, followUpOn: e.target.value || null })}
-        error={fields.followUpOn}
+        {...form.register("followUpOn")}
+        error={message("followUpOn")}
         hint={due.word === "overdue" ? <strong className="text-brick">Overdue: the buyer is waiting.</strong> : due.word === "today" ? "Due today." : "Leave empty for no reminder."}
       />
 
-      <TextAreaField label="Add a note" name="note" value={note} onChange={(e) => setNote(e.target.value)} error={fields.note} rows={3} hint="For the team only; the buyer never sees notes." />
+      <TextAreaField label="Add a note" {...form.register("note")} error={message("note")} rows={3} hint="For the team only; the buyer never sees notes." />
 
       <Button type="submit" busy={update.isPending && pending === "save"} disabled={!dirty || stale}>
         Save changes
