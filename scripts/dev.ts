@@ -4,7 +4,7 @@ import path from "node:path";
 import { ensureLocalDatabase } from "./local-db.ts";
 import { localStorage } from "../server/lib/storage.ts";
 import { connect } from "../server/db/connect-and-migrate.ts";
-import { seedDemoIfEmpty } from "../server/db/seed/demo.ts";
+import { seedDemoIfEmpty } from "../server/demo/demo.ts";
 
 await ensureLocalDatabase();
 const database = await connect(process.env.DATABASE_URL!);

@@ -3,7 +3,7 @@ import path from "node:path";
 import { ensureLocalDatabase } from "./local-db.ts";
 import { localStorage } from "../server/lib/storage.ts";
 import { connect } from "../server/db/connect-and-migrate.ts";
-import { resetDemo, seedDemoIfEmpty } from "../server/db/seed/demo.ts";
+import { resetDemo, seedDemoIfEmpty } from "../server/demo/demo.ts";
 
 if (process.env.NODE_ENV === "production") {
   console.error("The demo is never seeded when NODE_ENV=production.");

@@ -7,7 +7,7 @@ import path from "node:path";
 import { ensureLocalDatabase } from "./local-db.ts";
 import { localStorage } from "../server/lib/storage.ts";
 import { connect } from "../server/db/connect-and-migrate.ts";
-import { seedDemoIfEmpty, DEMO_USERS } from "../server/db/seed/demo.ts";
+import { seedDemoIfEmpty, DEMO_USERS } from "../server/demo/demo.ts";
 import { main } from "../server/index.ts";
 
 await ensureLocalDatabase();

@@ -1,7 +1,7 @@
 /**
  * The demo stock of Fernhollow Motors (./demo.ts): 30 vehicles in every status, built relative to `today` so the
  * data never dates. Every make, model, workshop and plate here is invented; the makes and models are our own words
- * and faker's vehicle module is never used (it lists real brands; ../../../../shared/PRODUCT.md "Demo scenario").
+ * and faker's vehicle module is never used (it lists real brands; ../../../shared/PRODUCT.md "Demo scenario").
  *
  * Invented makes and models: Corvane Pimlet and Dapple, Ambrel Loam and Brackle, Vantrel Ohmra and Sparrel,
  * Kessamer Yardhand, Drovell Cartway, Lumbrey Sorrel and Brindle.
@@ -14,13 +14,13 @@
  * - the intake records are incomplete (no price, no listing copy, some specification missing).
  */
 import { Faker, en } from "@faker-js/faker";
-import type { VehicleStatus } from "../../../shared/constants/vehicle.ts";
-import { LABELS } from "../../../shared/constants/vehicle.ts";
-import { addMonths, dayNumber, formatIsoDate, fromDayNumber, parseIsoDate, type CalendarDate } from "../../../shared/domain/calendar.ts";
-import type { ServiceKind } from "../../../shared/domain/service.ts";
-import { computeCheckDigit } from "../../../shared/domain/vin.ts";
-import { MODEL_YEAR_CODES } from "../../../shared/domain/vin-model-year.ts";
-import type { CreateVehicleInput, ServiceEntryInput } from "../../../shared/schemas/vehicles.ts";
+import type { VehicleStatus } from "../../shared/constants/vehicle.ts";
+import { LABELS } from "../../shared/constants/vehicle.ts";
+import { addMonths, dayNumber, formatIsoDate, fromDayNumber, parseIsoDate, type CalendarDate } from "../../shared/domain/calendar.ts";
+import type { ServiceKind } from "../../shared/domain/service.ts";
+import { computeCheckDigit } from "../../shared/domain/vin.ts";
+import { MODEL_YEAR_CODES } from "../../shared/domain/vin-model-year.ts";
+import type { CreateVehicleInput, ServiceEntryInput } from "../../shared/schemas/vehicles.ts";
 
 export interface DemoVehicle {
   input: CreateVehicleInput;

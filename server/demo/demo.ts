@@ -4,12 +4,12 @@
  */
 import { generateIdFromEntropySize } from "lucia";
 import { sql } from "drizzle-orm";
-import type { Db } from "../client.ts";
-import { dealerships, users } from "../schema/index.ts";
-import { hashPassword } from "../../modules/auth/password.ts";
-import type { Role } from "../../../shared/constants/roles.ts";
+import type { Db } from "../db/client.ts";
+import { dealerships, users } from "../db/schema/index.ts";
+import { hashPassword } from "../modules/auth/auth.service.ts";
+import type { Role } from "../../shared/constants/roles.ts";
 import { seedDemoExtensions } from "./extensions.ts";
-import type { Storage } from "../../lib/storage.ts";
+import type { Storage } from "../lib/storage.ts";
 
 export const DEMO_DEALERSHIP = {
   slug: "fernhollow-motors",

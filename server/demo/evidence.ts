@@ -5,13 +5,13 @@
  */
 import { eq } from "drizzle-orm";
 import sharp from "sharp";
-import type { Db } from "../client.ts";
-import { checkResults, defects, photos, tyreReadings, vehicles, zoneMarks } from "../schema/index.ts";
-import type { Storage } from "../../lib/storage.ts";
-import { prepareMaster, makeCloseup } from "../../modules/photos/photo-pipeline.ts";
+import type { Db } from "../db/client.ts";
+import { checkResults, defects, photos, tyreReadings, vehicles, zoneMarks } from "../db/schema/index.ts";
+import type { Storage } from "../lib/storage.ts";
+import { prepareMaster, makeCloseup } from "../modules/photos/photos.service.ts";
 import { renderDemoPhoto, ANGLE_ZONE, type Angle, type BodyType } from "./art/index.ts";
-import { CHECK_ITEMS, ZONES, type Zone } from "../../../shared/constants/evidence.ts";
-import { dayIn } from "../../lib/clock.ts";
+import { CHECK_ITEMS, ZONES, type Zone } from "../../shared/constants/evidence.ts";
+import { dayIn } from "../lib/clock.ts";
 
 /** A small deterministic generator, so the demo is the same on every machine. */
 function rng(seed: number) {

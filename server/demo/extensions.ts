@@ -1,5 +1,5 @@
-import type { Db } from "../client.ts";
-import type { Storage } from "../../lib/storage.ts";
+import type { Db } from "../db/client.ts";
+import type { Storage } from "../lib/storage.ts";
 import { seedDemoVehicles } from "./vehicles.ts";
 import { seedDemoEvidence } from "./evidence.ts";
 import { publishDemoVehicles } from "./publish.ts";

@@ -1,11 +1,11 @@
 import { eq, inArray } from "drizzle-orm";
-import type { Db } from "../client.ts";
-import { photos, users, vehicleEvents, vehicles } from "../schema/index.ts";
-import type { Storage } from "../../lib/storage.ts";
-import type { AppContext } from "../../lib/context.ts";
-import { makeVariants } from "../../modules/photos/photo-pipeline.ts";
-import { publish } from "../../modules/publishing/publishing.service.ts";
-import type { VehicleStatus } from "../../../shared/constants/vehicle.ts";
+import type { Db } from "../db/client.ts";
+import { photos, users, vehicleEvents, vehicles } from "../db/schema/index.ts";
+import type { Storage } from "../lib/storage.ts";
+import type { AppContext } from "../lib/context.ts";
+import { makeSizesNow } from "../modules/photos/photos.service.ts";
+import { publish } from "../modules/publishing/publishing.service.ts";
+import type { VehicleStatus } from "../../shared/constants/vehicle.ts";
 
 const PUBLISHED: VehicleStatus[] = ["live", "reserved", "sold", "withdrawn"];
 
@@ -26,10 +26,7 @@ export async function publishDemoVehicles(db: Db, storage: Storage, dealershipId
   const ids = targets.filter((v) => v.dealershipId === dealershipId).map((v) => v.id);
   if (!ids.length) return;
   const pending = await db.select().from(photos).where(inArray(photos.vehicleId, ids));
-  await twoAtATime(pending, async (p) => {
-    const variants = await makeVariants(storage, p.hash, await storage.read(p.masterKey), p.width);
-    await db.update(photos).set({ variants, status: "ready" }).where(eq(photos.id, p.id));
-  });
+  await twoAtATime(pending, (p) => makeSizesNow(db, storage, p));
   const [seller] = await db.select().from(users).where(eq(users.email, "sales@demo.test"));
   const actor = { id: seller!.id, email: seller!.email, name: seller!.name, role: seller!.role, active: true, dealershipId };
   const ctx = { database: { db }, now: () => new Date(), config: { publicUrl } } as unknown as AppContext;

@@ -1,10 +1,10 @@
 import { eq } from "drizzle-orm";
-import type { Db } from "../client.ts";
-import { dealerships, users, vehicleEvents, vehicles } from "../schema/index.ts";
-import { dayIn, DAY_MS } from "../../lib/clock.ts";
-import { deriveFor } from "../../modules/vehicles/derive.ts";
-import { STATUS_MOVES } from "../../../shared/domain/status.ts";
-import type { VehicleStatus } from "../../../shared/constants/vehicle.ts";
+import type { Db } from "../db/client.ts";
+import { dealerships, users, vehicleEvents, vehicles } from "../db/schema/index.ts";
+import { dayIn, DAY_MS } from "../lib/clock.ts";
+import { deriveFor } from "../modules/vehicles/vehicles.service.ts";
+import { STATUS_MOVES } from "../../shared/domain/status.ts";
+import type { VehicleStatus } from "../../shared/constants/vehicle.ts";
 import { demoVehicles } from "./demo-vehicles.ts";
 
 /** The shortest path from intake to a status along the allowed moves, so each demo vehicle has a believable history. */

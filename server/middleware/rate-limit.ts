@@ -1,6 +1,5 @@
 import type { Pool as PromisePool } from "mysql2/promise";
-import { RateLimiterMySQL, RateLimiterRes } from "rate-limiter-flexible";
-import { tooMany } from "../lib/errors.ts";
+import { RateLimiterMySQL } from "rate-limiter-flexible";
 
 export interface LimitSpec {
   points: number;
@@ -56,22 +55,4 @@ export function createLimiters(pool: PromisePool, database: string, settings: Li
   };
 }
 
-const minutes = (ms: number) => Math.max(1, Math.ceil(ms / 60_000));
-
-/** Consumes one point, or throws a 429 whose message says how long to wait. */
-export async function consume(limiter: Limiter, key: string, what: string): Promise<void> {
-  try {
-    await limiter.consume(key);
-  } catch (e) {
-    if (e instanceof RateLimiterRes) {
-      const wait = minutes(e.msBeforeNext);
-      throw tooMany(`Too many ${what}. Wait ${wait} minute${wait === 1 ? "" : "s"} and try again.`, Math.ceil(e.msBeforeNext / 1000));
-    }
-    throw e;
-  }
-}
-
-export async function isBlocked(limiter: Limiter, key: string): Promise<RateLimiterRes | null> {
-  const res = await limiter.get(key);
-  return res && res.consumedPoints >= limiter.points ? res : null;
-}
+// Spending a point (consume, isBlocked) is in server/lib/rate-limit.ts, where the services reach it.

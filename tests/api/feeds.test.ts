@@ -15,7 +15,7 @@ let app: Express;
 const agent = () => request.agent(app).set("Origin", ORIGIN);
 async function signIn(role: "admin" | "sales" | "workshop" | "marketing") {
   const a = agent();
-  const { DEMO_USERS } = await import("../../server/db/seed/demo.ts");
+  const { DEMO_USERS } = await import("../../server/demo/demo.ts");
   const { DEMO_PASSWORD } = await import("../support/app.ts");
   const res = await a.post("/api/auth/sign-in").send({ email: DEMO_USERS.find((u) => u.role === role)!.email, password: DEMO_PASSWORD });
   expect(res.status).toBe(200);

@@ -19,7 +19,7 @@ import type { User } from "lucia";
 import { createContext } from "../../server/lib/boot.ts";
 import { createApp } from "../../server/app.ts";
 import { dealerships, revisions, users, vehicles } from "../../server/db/schema/index.ts";
-import { DEMO_DEALERSHIP, seedDemo } from "../../server/db/seed/demo.ts";
+import { DEMO_DEALERSHIP, seedDemo } from "../../server/demo/demo.ts";
 import { feedsPublicRoutes } from "../../server/modules/feeds/feeds.public.routes.ts";
 import { create as createFeed } from "../../server/modules/feeds/feeds.service.ts";
 import { DAY_MS } from "../../server/lib/clock.ts";

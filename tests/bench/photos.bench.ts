@@ -27,7 +27,7 @@ import sharp from "sharp";
 import { pino } from "pino";
 import { createContext } from "../../server/lib/boot.ts";
 import { createApp } from "../../server/app.ts";
-import { seedDemo } from "../../server/db/seed/demo.ts";
+import { seedDemo } from "../../server/demo/demo.ts";
 import { localStorage } from "../../server/lib/storage.ts";
 import { makeVariants, prepareMaster } from "../../server/modules/photos/photo-pipeline.ts";
 import { listen } from "../support/http-server.ts";

@@ -35,7 +35,7 @@ import type { Result as LighthouseResult } from "lighthouse";
 import { createContext } from "../../server/lib/boot.ts";
 import { createApp } from "../../server/app.ts";
 import type { AppContext } from "../../server/lib/context.ts";
-import { DEMO_USERS, seedDemo } from "../../server/db/seed/demo.ts";
+import { DEMO_USERS, seedDemo } from "../../server/demo/demo.ts";
 import { getPublic } from "../../server/modules/publishing/public.service.ts";
 import { defaultLimits, type LimitSettings } from "../../server/middleware/rate-limit.ts";
 import type { TestApp } from "../support/app.ts";

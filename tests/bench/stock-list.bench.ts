@@ -10,7 +10,7 @@ import { createContext } from "../../server/lib/boot.ts";
 import { createApp } from "../../server/app.ts";
 import type { Db } from "../../server/db/client.ts";
 import { dealerships, vehicles, type Dealership } from "../../server/db/schema/index.ts";
-import { DEMO_DEALERSHIP, seedDemo } from "../../server/db/seed/demo.ts";
+import { DEMO_DEALERSHIP, seedDemo } from "../../server/demo/demo.ts";
 import { listConditions, SORT_SQL } from "../../server/modules/vehicles/vehicles.queries.ts";
 import { deriveFor } from "../../server/modules/vehicles/vehicles.service.ts";
 import { dayIn, DAY_MS } from "../../server/lib/clock.ts";

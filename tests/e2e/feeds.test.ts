@@ -4,7 +4,7 @@ import { parse as parseCsv } from "csv-parse/sync";
 import { e2eWorld } from "../support/e2e.ts";
 import { screenshot, watchErrors } from "../support/browser.ts";
 import { publishReadyVehicle } from "../support/publishing.ts";
-import { DEMO_USERS } from "../../server/db/seed/demo.ts";
+import { DEMO_USERS } from "../../server/demo/demo.ts";
 
 const world = e2eWorld();
 const marketing = DEMO_USERS.find((u) => u.role === "marketing")!.email;

@@ -15,7 +15,7 @@ import { e2eWorld } from "../support/e2e.ts";
 import { imagesSettled, RESULTS_DIR, screenshot, watchErrors } from "../support/browser.ts";
 import { catchMail } from "../support/mail.ts";
 import { dieselSuv } from "../support/vehicles.ts";
-import { renderDemoPhoto, type Angle } from "../../server/db/seed/art/index.ts";
+import { renderDemoPhoto, type Angle } from "../../server/demo/art/index.ts";
 import { computeCheckDigit } from "../../shared/domain/vin.ts";
 import { ZONES } from "../../shared/constants/evidence.ts";
 import { MIN_FILL_MS } from "../../shared/constants/leads.ts";
@@ -23,14 +23,14 @@ import { MIN_FILL_MS } from "../../shared/constants/leads.ts";
 const world = e2eWorld();
 let mail: Awaited<ReturnType<typeof catchMail>>;
 
-// Everyone is where the demo dealership is (server/db/seed/demo.ts: en-AU, Australia/Brisbane), so staff dates read
+// Everyone is where the demo dealership is (server/demo/demo.ts: en-AU, Australia/Brisbane), so staff dates read
 // as they would at Fernhollow Motors.
 const WHERE = { locale: "en-AU", timezoneId: "Australia/Brisbane" };
 // A phone held in one hand on the yard or on the sofa (390 × 844 CSS px, common practice, no source).
 const PHONE = { ...WHERE, viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
 const DESK = { ...WHERE, viewport: { width: 1366, height: 900 }, deviceScaleFactor: 1 };
 
-/** "Z9A" is the demo's invented maker prefix for Ambrel (server/db/seed/demo-vehicles.ts); position 9 is computed. */
+/** "Z9A" is the demo's invented maker prefix for Ambrel (server/demo/demo-vehicles.ts); position 9 is computed. */
 function demoVin(): string {
   const draft = "Z9ALM7D80TK204118";
   return draft.slice(0, 8) + computeCheckDigit(draft)! + draft.slice(9);

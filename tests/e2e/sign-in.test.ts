@@ -5,7 +5,7 @@ import type { Browser } from "playwright-core";
 import { DEMO_PASSWORD, startTestApp, type TestApp } from "../support/app.ts";
 import { launchBrowser, screenshot, watchErrors } from "../support/browser.ts";
 import { listen } from "../support/http-server.ts";
-import { DEMO_USERS } from "../../server/db/seed/demo.ts";
+import { DEMO_USERS } from "../../server/demo/demo.ts";
 
 let t: TestApp;
 let browser: Browser;

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { imagesSettled, screenshot, watchErrors } from "../support/browser.ts";
 import { dieselSuv } from "../support/vehicles.ts";
-import { renderDemoPhoto } from "../../server/db/seed/art/index.ts";
+import { renderDemoPhoto } from "../../server/demo/art/index.ts";
 
 const world = e2eWorld();
 

@@ -7,7 +7,7 @@ import { pino } from "pino";
 import { createApp } from "../../server/app.ts";
 import { createContext } from "../../server/lib/boot.ts";
 import type { AppContext } from "../../server/lib/context.ts";
-import { seedDemo, DEMO_USERS } from "../../server/db/seed/demo.ts";
+import { seedDemo, DEMO_USERS } from "../../server/demo/demo.ts";
 import type { LimitSettings } from "../../server/middleware/rate-limit.ts";
 import type { Role } from "../../shared/constants/roles.ts";
 import { createTestDatabase } from "./database.ts";

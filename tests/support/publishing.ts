@@ -1,7 +1,7 @@
 import sharp from "sharp";
 import type { TestApp } from "./app.ts";
 import { dieselSuv } from "./vehicles.ts";
-import { renderDemoPhoto, type Angle } from "../../server/db/seed/art/index.ts";
+import { renderDemoPhoto, type Angle } from "../../server/demo/art/index.ts";
 import { ZONES } from "../../shared/constants/evidence.ts";
 
 export const READY_TYRES = (["front_left", "front_right", "rear_left", "rear_right"] as const).map((position) => ({

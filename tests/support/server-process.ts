@@ -7,7 +7,7 @@ import { fileURLToPath } from "node:url";
 import { pino } from "pino";
 import { createApp } from "../../server/app.ts";
 import { createContext } from "../../server/lib/boot.ts";
-import { seedDemo, DEMO_USERS } from "../../server/db/seed/demo.ts";
+import { seedDemo, DEMO_USERS } from "../../server/demo/demo.ts";
 import type { Role } from "../../shared/constants/roles.ts";
 import { agentsFor, DEMO_PASSWORD, ORIGIN, type TestApp } from "./app.ts";
 import { createTestDatabase } from "./database.ts";

@@ -3,7 +3,7 @@
  * corner over the roof to the rear bumper's lower corner (front at x = 0); each edge carries the material of the
  * surface it sweeps across the width. Generic, invented proportions: no maker's shape is copied.
  */
-import type { BODY_TYPES } from "../../../../shared/constants/vehicle.ts";
+import type { BODY_TYPES } from "../../../shared/constants/vehicle.ts";
 
 export type BodyType = (typeof BODY_TYPES)[number];
 export type Material = "paint" | "glass" | "dark" | "interior";

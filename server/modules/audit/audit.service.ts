@@ -1,12 +1,16 @@
 import type { DbOrTx } from "../../db/client.ts";
 import { auditLog } from "../../db/schema/index.ts";
 import { and, desc, eq } from "drizzle-orm";
+import type { User } from "lucia";
 
 export interface Actor {
   id: string | null;
   email: string | null;
   dealershipId: number;
 }
+
+/** The audit actor of a signed-in user: who did it, and in which dealership's trail it is written. */
+export const actorOf = (u: Pick<User, "id" | "email" | "dealershipId">): Actor => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
 
 export interface AuditInput {
   action: string;

@@ -2,9 +2,12 @@ import { eq } from "drizzle-orm";
 import type { AppContext } from "../../lib/context.ts";
 import { users } from "../../db/schema/index.ts";
 import { unauthorized } from "../../lib/errors.ts";
-import { consume, isBlocked } from "../../middleware/rate-limit.ts";
+import { consume, isBlocked } from "../../lib/rate-limit.ts";
 import { timingSafeMiss, verifyPassword } from "./password.ts";
-import { recordAudit } from "../audit/audit.service.ts";
+
+// Accounts made outside a request (the demo seed) hash their passwords the same way.
+export { hashPassword } from "./password.ts";
+import { actorOf, recordAudit } from "../audit/audit.service.ts";
 import type { SignInInput } from "../../../shared/schemas/auth.ts";
 import { tooMany } from "../../lib/errors.ts";
 
@@ -34,7 +37,7 @@ export async function signIn(ctx: AppContext, input: SignInInput, ip: string) {
   await ctx.limiters.signInPerAccount.delete(input.email).catch(() => undefined);
   const session = await ctx.auth.createSession(user.id, {});
   await db.update(users).set({ lastSignInAt: ctx.now() }).where(eq(users.id, user.id));
-  await recordAudit(db, { id: user.id, email: user.email, dealershipId: user.dealershipId }, {
+  await recordAudit(db, actorOf(user), {
     action: "sign_in",
     entityType: "user",
     entityId: user.id,

@@ -4,12 +4,13 @@ import { generateIdFromEntropySize, type User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import { authTokens, users } from "../../db/schema/index.ts";
 import { AppError, badRequest } from "../../lib/errors.ts";
-import { consume } from "../../middleware/rate-limit.ts";
-import { recordAudit } from "../audit/audit.service.ts";
+import { consume } from "../../lib/rate-limit.ts";
+import { actorOf, recordAudit } from "../audit/audit.service.ts";
 import { getDealership } from "../dealerships/dealerships.service.ts";
 import { enqueueMail } from "../mail/outbox.ts";
 import { inviteMail, resetMail } from "../mail/templates.ts";
 import { hashPassword, weakPasswordReason } from "./password.ts";
+import { presentInvite, type InviteView } from "./auth.presenter.ts";
 import { ROLE_LABELS, type Role } from "../../../shared/constants/roles.ts";
 
 const INVITE_MS = 7 * 24 * 3600 * 1000;
@@ -31,7 +32,7 @@ export async function invite(ctx: AppContext, actor: User, input: { email: strin
     await tx.insert(authTokens).values({ kind: "invite", tokenHash: sha256(token), dealershipId: d.id, email: input.email, name: input.name, role: input.role, expiresAt: new Date(ctx.now().getTime() + INVITE_MS), createdBy: actor.id });
     const url = `${ctx.config.publicUrl}/accept-invite?token=${token}`;
     await enqueueMail(tx, { to: input.email, kind: "invite", ...inviteMail(d, { name: input.name, role: ROLE_LABELS[input.role].label.toLowerCase(), url, invitedBy: actor.name }) }, ctx.now());
-    await recordAudit(tx, { id: actor.id, email: actor.email, dealershipId: actor.dealershipId }, { action: "user_invited", entityType: "user", entityId: input.email, after: { email: input.email, name: input.name, role: input.role } });
+    await recordAudit(tx, actorOf(actor), { action: "user_invited", entityType: "user", entityId: input.email, after: { email: input.email, name: input.name, role: input.role } });
   });
   ctx.mail.kick();
   return { invited: input.email };
@@ -45,10 +46,10 @@ async function liveToken(ctx: AppContext, kind: "invite" | "reset", token: strin
   return row ?? null;
 }
 
-export async function inspectInvite(ctx: AppContext, token: string) {
+export async function inspectInvite(ctx: AppContext, token: string): Promise<InviteView> {
   const row = await liveToken(ctx, "invite", token);
   if (!row) throw invalid();
-  return { email: row.email, name: row.name, role: row.role };
+  return presentInvite(row);
 }
 
 /** The invitee sets their own password; the account is created and signed in. The token works once. */

@@ -3,58 +3,29 @@ import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import type { DbOrTx } from "../../db/client.ts";
 import { checkResults, tyreReadings, vehicles } from "../../db/schema/index.ts";
-import { conflict, notFound } from "../../lib/errors.ts";
-import { recordAudit } from "../audit/audit.service.ts";
-import { findVehicle } from "../vehicles/vehicles.queries.ts";
+import { conflict } from "../../lib/errors.ts";
+import { actorOf, recordAudit } from "../audit/audit.service.ts";
+import { lockVehicle, requireVehicle } from "../vehicles/vehicles.service.ts";
 import { getDealership, todayFor } from "../dealerships/dealerships.service.ts";
-import { assessTyre } from "../../../shared/domain/tyre-assessment.ts";
-import { safetyCautions } from "../../../shared/domain/cautions.ts";
-import { CHECK_LABELS, TYRE_POSITION_LABELS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "../../../shared/constants/evidence.ts";
 import type { ChecksInput, TyresInput } from "../../../shared/schemas/evidence.ts";
 import type { Dealership } from "../../db/schema/index.ts";
+import { checksOf, tyresOf } from "./checks.queries.ts";
+import { presentChecks, type ChecksView } from "./checks.presenter.ts";
 import type { DealershipDay } from "../../lib/clock.ts";
 
-const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
+// The client still imports this type from here; it lives in checks.presenter.ts.
+export type { presentChecks };
 
-export const tyresOf = (db: DbOrTx, vehicleId: number) => db.select().from(tyreReadings).where(eq(tyreReadings.vehicleId, vehicleId));
-export const checksOf = (db: DbOrTx, vehicleId: number) => db.select().from(checkResults).where(eq(checkResults.vehicleId, vehicleId));
-
-/** Tyres and checks with every computed figure and the cautions they call for. */
-export function presentChecks(
-  d: Pick<Dealership, "legalMinTreadMm" | "newTyreTreadMm">,
-  v: { tyresVersion: number; checksVersion: number },
-  tyres: Awaited<ReturnType<typeof tyresOf>>,
-  checks: Awaited<ReturnType<typeof checksOf>>,
-) {
-  const order = (p: string) => TYRE_POSITIONS.indexOf(p as TyrePosition);
-  const readings = [...tyres].sort((a, b) => order(a.position) - order(b.position)).map((t) => ({
-    reading: {
-      position: t.position,
-      treadInnerMm: t.treadInnerMm,
-      treadCentreMm: t.treadCentreMm,
-      treadOuterMm: t.treadOuterMm,
-      sizeDesignation: t.sizeDesignation,
-      dotCode: t.dotCode,
-      pressureKpa: t.pressureKpa,
-    },
-    assessment: assessTyre(t, { legalMinTreadMm: d.legalMinTreadMm, newTyreTreadMm: d.newTyreTreadMm, measuredOn: t.measuredOn }),
-    measuredOn: t.measuredOn,
-    measuredBy: t.measuredBy,
-  }));
-  const results = checks.map((c) => ({ item: c.item, label: CHECK_LABELS[c.item as CheckItem], result: c.result, note: c.note, checkedOn: c.checkedOn, checkedBy: c.checkedBy }));
-  return {
-    tyres: { version: v.tyresVersion, measuredOn: tyres[0]?.measuredOn ?? null, legalMinTreadMm: d.legalMinTreadMm, readings },
-    checks: { version: v.checksVersion, results },
-    cautions: safetyCautions(results, readings.map((r) => r.assessment), (p) => TYRE_POSITION_LABELS[p as TyrePosition] ?? p),
-  };
+/** The front door for other modules: a vehicle's tyres and checks as presented, read with the caller's db or tx. */
+export async function checksFor(db: DbOrTx, d: Pick<Dealership, "legalMinTreadMm" | "newTyreTreadMm">, v: { id: number; tyresVersion: number; checksVersion: number }): Promise<ChecksView> {
+  const [tyres, checks] = await Promise.all([tyresOf(db, v.id), checksOf(db, v.id)]);
+  return presentChecks(d, v, tyres, checks);
 }
 
 export async function get(ctx: AppContext, actor: User, vehicleId: number) {
   const { db } = ctx.database;
-  const v = await findVehicle(db, actor.dealershipId, vehicleId);
-  if (!v) throw notFound("That vehicle");
-  const [d, tyres, checks] = await Promise.all([getDealership(db, actor.dealershipId), tyresOf(db, vehicleId), checksOf(db, vehicleId)]);
-  return presentChecks(d, v, tyres, checks);
+  const v = await requireVehicle(db, actor.dealershipId, vehicleId);
+  return checksFor(db, await getDealership(db, actor.dealershipId), v);
 }
 
 const stale = (what: string, current: unknown) =>
@@ -66,8 +37,7 @@ const sameReading = (a: Record<string, unknown>, b: Record<string, unknown>) =>
 /** Replaces the tyre readings as a set, so the record always shows one measuring session. */
 export async function putTyres(ctx: AppContext, actor: User, vehicleId: number, input: TyresInput, day?: DealershipDay) {
   return ctx.database.db.transaction(async (tx) => {
-    const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
-    if (!v) throw notFound("That vehicle");
+    const v = await lockVehicle(tx, actor.dealershipId, vehicleId);
     // The route already read the dealership for the schema's "today"; read it here only when called without it.
     const d = day?.dealership ?? (await getDealership(tx, actor.dealershipId));
     const before = await tyresOf(tx, vehicleId);
@@ -91,8 +61,7 @@ export async function putTyres(ctx: AppContext, actor: User, vehicleId: number, 
 
 export async function putChecks(ctx: AppContext, actor: User, vehicleId: number, input: ChecksInput) {
   return ctx.database.db.transaction(async (tx) => {
-    const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
-    if (!v) throw notFound("That vehicle");
+    const v = await lockVehicle(tx, actor.dealershipId, vehicleId);
     const d = await getDealership(tx, actor.dealershipId);
     const before = await checksOf(tx, vehicleId);
     if (v.checksVersion !== input.version) throw stale("checks", presentChecks(d, v, await tyresOf(tx, vehicleId), before));

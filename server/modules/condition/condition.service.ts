@@ -1,35 +1,15 @@
 import type { DbOrTx } from "../../db/client.ts";
 import type { Dealership } from "../../db/schema/index.ts";
-import { conditionIndex, conditionIndexExplanation, summariseDefects } from "../../../shared/domain/condition-index.ts";
-import { photosOf } from "../photos/photos.queries.ts";
-import { presentPhoto } from "../photos/photos.presenter.ts";
-import { defectsOf, marksOf, zoneStates } from "../walkaround/walkaround.service.ts";
-import { presentDefect } from "../walkaround/walkaround.presenter.ts";
-import { checksOf, presentChecks, tyresOf } from "../checks/checks.service.ts";
+import { photoViewsOf } from "../photos/photos.service.ts";
+import { walkaroundRecordsOf } from "../walkaround/walkaround.service.ts";
+import { checksFor } from "../checks/checks.service.ts";
+import { presentEvidence, type Evidence } from "./condition.presenter.ts";
 
-/**
- * Everything recorded about a vehicle's condition, with the figures computed from it: photos, defects and zones,
- * tyres and checks with their cautions, and the condition index with its explanation and counts.
- */
-export async function evidenceOf(db: DbOrTx, d: Dealership, v: { id: number; tyresVersion: number; checksVersion: number }) {
-  const [photoRows, defectRows, marks, tyres, checks] = await Promise.all([photosOf(db, v.id), defectsOf(db, v.id), marksOf(db, v.id), tyresOf(db, v.id), checksOf(db, v.id)]);
-  const checkSet = presentChecks(d, v, tyres, checks);
-  const index = conditionIndex({
-    defects: defectRows,
-    tyres: checkSet.tyres.readings.map((r) => ({ position: r.reading.position, treadVerdict: r.assessment.tread?.verdict ?? null, ageYears: r.assessment.ageYears })),
-    checks: checkSet.checks.results,
-  });
-  return {
-    photos: photoRows.map(presentPhoto),
-    defects: defectRows.map(presentDefect),
-    zones: zoneStates(defectRows, marks),
-    ...checkSet,
-    condition: {
-      index: index?.index ?? null,
-      deductions: index?.deductions ?? [],
-      summary: summariseDefects(defectRows),
-      explanation: conditionIndexExplanation(),
-    },
-  };
+// The client still imports this type from here; it lives in condition.presenter.ts.
+export type { Evidence };
+
+/** Gathers everything recorded about a vehicle's condition, through each evidence module's front door. */
+export async function evidenceOf(db: DbOrTx, d: Dealership, v: { id: number; tyresVersion: number; checksVersion: number }): Promise<Evidence> {
+  const [photos, walkaround, checkSet] = await Promise.all([photoViewsOf(db, v.id), walkaroundRecordsOf(db, v.id), checksFor(db, d, v)]);
+  return presentEvidence(photos, walkaround.defects, walkaround.marks, checkSet);
 }
-export type Evidence = Awaited<ReturnType<typeof evidenceOf>>;

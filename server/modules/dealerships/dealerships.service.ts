@@ -5,8 +5,12 @@ import type { DbOrTx } from "../../db/client.ts";
 import { dealerships, type Dealership } from "../../db/schema/index.ts";
 import { notFound, staleVersion } from "../../lib/errors.ts";
 import { dayIn } from "../../lib/clock.ts";
-import { diffFields, recordAudit } from "../audit/audit.service.ts";
-import type { DealershipSettingsInput, PublicDealership } from "../../../shared/schemas/dealership.ts";
+import { actorOf, diffFields, recordAudit } from "../audit/audit.service.ts";
+import type { DealershipSettingsInput } from "../../../shared/schemas/dealership.ts";
+import { presentDealership } from "./dealerships.presenter.ts";
+
+// dealerships.routes.ts still imports these from here; they live in dealerships.presenter.ts.
+export { presentDealership, presentPublicDealership } from "./dealerships.presenter.ts";
 
 /** The dealership's calendar day now: the clock every derived figure is computed against. */
 export const todayFor = (ctx: AppContext, d: Pick<Dealership, "timeZone">) => dayIn(d.timeZone, ctx.now());
@@ -24,31 +28,6 @@ export async function primaryDealership(db: DbOrTx): Promise<Dealership | null> 
   return row ?? null;
 }
 
-export function presentDealership(d: Dealership) {
-  const { createdAt, updatedAt, ...rest } = d;
-  return { ...rest, createdAt: createdAt.toISOString(), updatedAt: updatedAt.toISOString() };
-}
-
-export function presentPublicDealership(d: Dealership): PublicDealership {
-  return {
-    name: d.name,
-    slug: d.slug,
-    addressLine: d.addressLine,
-    town: d.town,
-    region: d.region,
-    postcode: d.postcode,
-    country: d.country,
-    licenceNumber: d.licenceNumber,
-    phone: d.phone,
-    email: d.email,
-    website: d.website,
-    locale: d.locale,
-    currency: d.currency,
-    distanceUnit: d.distanceUnit,
-    timeZone: d.timeZone,
-  };
-}
-
 export async function updateSettings(ctx: AppContext, actor: User, input: DealershipSettingsInput) {
   return ctx.database.db.transaction(async (tx) => {
     const current = await getDealership(tx, actor.dealershipId, true);
@@ -56,7 +35,7 @@ export async function updateSettings(ctx: AppContext, actor: User, input: Dealer
     const { version, ...changes } = input;
     await tx.update(dealerships).set({ ...changes, version: version + 1 }).where(eq(dealerships.id, current.id));
     const diff = diffFields(current as unknown as Record<string, unknown>, changes);
-    await recordAudit(tx, { id: actor.id, email: actor.email, dealershipId: actor.dealershipId }, {
+    await recordAudit(tx, actorOf(actor), {
       action: "settings_updated",
       entityType: "dealership",
       entityId: current.id,

@@ -5,7 +5,7 @@ import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import { dealerships, feeds, type Dealership, type Feed } from "../../db/schema/index.ts";
 import { notFound, staleVersion } from "../../lib/errors.ts";
-import { diffFields, recordAudit } from "../audit/audit.service.ts";
+import { actorOf, diffFields, recordAudit } from "../audit/audit.service.ts";
 import {
   DEFAULT_STATUSES, FORMATS_WITH_COLUMNS, effectiveColumns, type CreateFeedInput, type FeedColumn, type FeedFormat, type PreviewFeedInput, type UpdateFeedInput,
 } from "../../../shared/schemas/feeds.ts";
@@ -15,8 +15,6 @@ import { CONTENT_TYPES, writerFor, type FeedItem } from "./writers.ts";
 import { feedSelect, findFeed, findFeedByTokenHash, fingerprintSelect, listFeeds, logFetch, recentFetches, takeConnection } from "./feeds.queries.ts";
 import { presentFeed, type FeedPreview } from "./feeds.presenter.ts";
 import { hashFeedToken, newFeedToken, TOKEN_PATTERN } from "./token.ts";
-
-const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
 
 export const feedUrl = (ctx: AppContext, token: string, format: FeedFormat) => `${ctx.config.publicUrl}/feeds/${token}.${format}`;
 

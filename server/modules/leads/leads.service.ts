@@ -1,17 +1,20 @@
 import { and, asc, desc, eq, inArray, like, lt, or, sql, type SQL } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
-import { leadNotes, leads, outbox, revisions, users, vehicles, type Lead } from "../../db/schema/index.ts";
+import { leadNotes, leads, outbox, revisions, users, vehicles } from "../../db/schema/index.ts";
 import { AppError, badRequest, notFound, staleVersion } from "../../lib/errors.ts";
-import { consume } from "../../middleware/rate-limit.ts";
-import { recordAudit } from "../audit/audit.service.ts";
+import { consume } from "../../lib/rate-limit.ts";
+import { actorOf, recordAudit } from "../audit/audit.service.ts";
 import { getDealership, primaryDealership, todayFor } from "../dealerships/dealerships.service.ts";
 import { enqueueMail } from "../mail/outbox.ts";
+import { requireVehicle } from "../vehicles/vehicles.service.ts";
 import { enquiryConfirmation, enquiryToStaff, leadReply, shareMail, type EnquiryMailData } from "../mail/templates.ts";
 import { MIN_FILL_MS, CONTACT_LABELS, LEAD_STATUS_LABELS } from "../../../shared/constants/leads.ts";
-import type { EnquiryInput, LeadListQuery, UpdateLeadInput } from "../../../shared/schemas/enquiries.ts";
+import { presentLead, presentLeadCounts, presentLeadDetail, type LeadCounts, type LeadDetail } from "./leads.presenter.ts";
 
-const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
+// The client still imports this type from here; it lives in leads.presenter.ts.
+export type { presentLead };
+import type { EnquiryInput, LeadListQuery, UpdateLeadInput } from "../../../shared/schemas/enquiries.ts";
 
 /**
  * A buyer's enquiry: spam defences (honeypot, minimum fill time, rate limits per address and per vehicle), then the
@@ -50,29 +53,6 @@ export async function submitEnquiry(ctx: AppContext, slug: string, input: Enquir
   return { accepted: true as const };
 }
 
-export function presentLead(l: Lead, extra: { vehicle?: { title: string; stockNumber: string; slug: string | null }; assigneeName?: string | null; now: Date }) {
-  return {
-    id: l.id,
-    vehicleId: l.vehicleId,
-    vehicle: extra.vehicle ?? null,
-    revisionNumber: l.revisionNumber,
-    name: l.name,
-    email: l.email,
-    phone: l.phone,
-    message: l.message,
-    preferredContact: l.preferredContact,
-    tradeIn: l.tradeIn,
-    status: l.status,
-    statusLabel: LEAD_STATUS_LABELS[l.status],
-    assigneeId: l.assigneeId,
-    assigneeName: extra.assigneeName ?? null,
-    followUpOn: l.followUpOn,
-    ageDays: Math.floor((extra.now.getTime() - l.createdAt.getTime()) / 86_400_000),
-    createdAt: l.createdAt.toISOString(),
-    version: l.version,
-  };
-}
-
 export async function listLeads(ctx: AppContext, actor: User, q: LeadListQuery) {
   const { db } = ctx.database;
   const d = await getDealership(db, actor.dealershipId);
@@ -101,7 +81,7 @@ export async function listLeads(ctx: AppContext, actor: User, q: LeadListQuery) 
   return rows.map((r) => presentLead(r.lead, { vehicle: { title: r.title ?? `${r.stockNumber}`, stockNumber: r.stockNumber, slug: r.slug }, assigneeName: r.assigneeName, now }));
 }
 
-export async function getLead(ctx: AppContext, actor: User, id: number) {
+export async function getLead(ctx: AppContext, actor: User, id: number): Promise<LeadDetail> {
   const { db } = ctx.database;
   const [r] = await db
     .select({ lead: leads, title: revisions.title, stockNumber: vehicles.stockNumber, slug: vehicles.publicSlug, assigneeName: users.name })
@@ -114,13 +94,8 @@ export async function getLead(ctx: AppContext, actor: User, id: number) {
   const notes = await db.select().from(leadNotes).where(eq(leadNotes.leadId, id)).orderBy(asc(leadNotes.at), asc(leadNotes.id));
   const mailIds = notes.map((n) => n.outboxId).filter((x): x is number => x != null);
   const mails = mailIds.length ? await db.select({ id: outbox.id, status: outbox.status, sentAt: outbox.sentAt }).from(outbox).where(inArray(outbox.id, mailIds)) : [];
-  return {
-    ...presentLead(r.lead, { vehicle: { title: r.title ?? r.stockNumber, stockNumber: r.stockNumber, slug: r.slug }, assigneeName: r.assigneeName, now: ctx.now() }),
-    conversation: notes.map((n) => {
-      const m = mails.find((x) => x.id === n.outboxId);
-      return { id: n.id, kind: n.kind, body: n.body, by: n.userName, at: n.at.toISOString(), mailStatus: m ? (m.status === "sent" ? "sent" : m.status === "failed" ? "failed" : "queued") : null };
-    }),
-  };
+  const lead = presentLead(r.lead, { vehicle: { title: r.title ?? r.stockNumber, stockNumber: r.stockNumber, slug: r.slug }, assigneeName: r.assigneeName, now: ctx.now() });
+  return presentLeadDetail(lead, notes, mails);
 }
 
 export async function updateLead(ctx: AppContext, actor: User, id: number, input: UpdateLeadInput) {
@@ -163,7 +138,7 @@ export async function replyToLead(ctx: AppContext, actor: User, id: number, body
 }
 
 /** For marketing: enquiries per vehicle and per source, never the buyers' details. */
-export async function leadCounts(ctx: AppContext, actor: User) {
+export async function leadCounts(ctx: AppContext, actor: User): Promise<LeadCounts> {
   const { db } = ctx.database;
   const perVehicle = await db
     .select({ vehicleId: leads.vehicleId, stockNumber: vehicles.stockNumber, title: revisions.title, n: sql<number>`count(*)` })
@@ -174,14 +149,13 @@ export async function leadCounts(ctx: AppContext, actor: User) {
     .groupBy(leads.vehicleId, vehicles.stockNumber, revisions.title)
     .orderBy(desc(sql`count(*)`));
   const perSource = await db.select({ source: leads.source, n: sql<number>`count(*)` }).from(leads).where(eq(leads.dealershipId, actor.dealershipId)).groupBy(leads.source);
-  return { perVehicle: perVehicle.map((r) => ({ ...r, n: Number(r.n) })), perSource: perSource.map((r) => ({ ...r, n: Number(r.n) })) };
+  return presentLeadCounts(perVehicle, perSource);
 }
 
 /** A salesperson sends a buyer the condition page. */
 export async function shareVehicle(ctx: AppContext, actor: User, vehicleId: number, input: { email: string; name: string; message: string }) {
   const { db } = ctx.database;
-  const [v] = await db.select().from(vehicles).where(and(eq(vehicles.id, vehicleId), eq(vehicles.dealershipId, actor.dealershipId)));
-  if (!v) throw notFound("That vehicle");
+  const v = await requireVehicle(db, actor.dealershipId, vehicleId);
   if (!v.publicSlug || !["live", "reserved"].includes(v.status)) throw new AppError(409, "not_public", "Publish the vehicle first: buyers can only open a published condition page.");
   const d = await getDealership(db, actor.dealershipId);
   const [rev] = await db.select({ title: revisions.title }).from(revisions).where(eq(revisions.id, v.currentRevisionId!));

@@ -3,11 +3,6 @@ import type { Database } from "../../db/client.ts";
 import { defects, photos, revisionMedia } from "../../db/schema/index.ts";
 import { removeIfOlder, removeListed, returnIfNeeded, type Storage } from "../../lib/storage.ts";
 
-/** Other modules (published revisions) register the keys they still need. */
-export type KeySource = (database: Database) => Promise<Iterable<string>>;
-const sources: KeySource[] = [];
-export const registerKeySource = (source: KeySource) => void sources.push(source);
-
 /** Every stored key a row refers to (also used by `npm run restore` to check a restored site). */
 export async function referencedKeys(database: Database): Promise<Set<string>> {
   const keys = new Set<string>();
@@ -18,7 +13,6 @@ export async function referencedKeys(database: Database): Promise<Set<string>> {
   for (const d of await database.db.select({ key: defects.closeupKey }).from(defects).where(isNotNull(defects.closeupKey))) keys.add(d.key!);
   // Published revisions keep their files for ever: what a buyer was shown must stay showable.
   for (const r of await database.db.select({ key: revisionMedia.key }).from(revisionMedia)) keys.add(r.key);
-  for (const source of sources) for (const k of await source(database)) keys.add(k);
   return keys;
 }
 

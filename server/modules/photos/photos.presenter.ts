@@ -31,3 +31,15 @@ export function presentPhoto(p: Photo) {
   };
 }
 export type PhotoView = ReturnType<typeof presentPhoto>;
+
+/** A file the upload could not use, with the reason in words. */
+export interface Refusal {
+  name: string;
+  status: number;
+  code: string;
+  reason: string;
+}
+
+/** POST /api/vehicles/:id/photos (201): the photos stored and the files refused, one by one. */
+export const presentUpload = (accepted: PhotoView[], refused: Refusal[]) => ({ photos: accepted, refused });
+export type UploadResult = ReturnType<typeof presentUpload>;

@@ -1,33 +1,52 @@
 import { and, eq, inArray, ne } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
-import { defects, photos, vehicles } from "../../db/schema/index.ts";
+import type { DbOrTx } from "../../db/client.ts";
+import type { Storage } from "../../lib/storage.ts";
+import { defects, photos, type Photo } from "../../db/schema/index.ts";
 import { AppError, conflict, notFound, staleVersion } from "../../lib/errors.ts";
-import { recordAudit } from "../audit/audit.service.ts";
+import { actorOf, recordAudit } from "../audit/audit.service.ts";
 import { PHOTO_LIMITS } from "../../../shared/constants/evidence.ts";
-import { findVehicle } from "../vehicles/vehicles.queries.ts";
-import { prepareMaster } from "./photo-pipeline.ts";
+import { lockVehicle, requireVehicle as vehicleOf } from "../vehicles/vehicles.service.ts";
+import { makeCloseup, makeVariants, prepareMaster } from "./photo-pipeline.ts";
 import { findPhoto, photoCount, photosOf } from "./photos.queries.ts";
-import { presentPhoto } from "./photos.presenter.ts";
-
-const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
+import { presentPhoto, type PhotoView, type Refusal } from "./photos.presenter.ts";
 
 export interface UploadedFile {
   originalname: string;
   buffer: Buffer;
 }
 
-export interface Refusal {
-  name: string;
-  status: number;
-  code: string;
-  reason: string;
+export type { Refusal };
+
+const requireVehicle = (ctx: AppContext, actor: User, vehicleId: number) => vehicleOf(ctx.database.db, actor.dealershipId, vehicleId);
+
+/** The front door for other modules: a vehicle's photos as presented, in order, read with the caller's db or tx. */
+export async function photoViewsOf(db: DbOrTx, vehicleId: number): Promise<PhotoView[]> {
+  return (await photosOf(db, vehicleId)).map(presentPhoto);
 }
 
-async function requireVehicle(ctx: AppContext, actor: User, vehicleId: number) {
-  const v = await findVehicle(ctx.database.db, actor.dealershipId, vehicleId);
-  if (!v) throw notFound("That vehicle");
-  return v;
+/**
+ * Makes a photo's served sizes now, on the caller's time instead of the worker's: the demo seed does this before it
+ * publishes, since a revision shows finished photos only. The version stays: nobody has seen the photo yet.
+ */
+export async function makeSizesNow(db: DbOrTx, storage: Storage, p: Photo) {
+  const variants = await makeVariants(storage, p.hash, await storage.read(p.masterKey), p.width);
+  await db.update(photos).set({ variants, status: "ready" }).where(eq(photos.id, p.id));
+}
+
+// Image work the demo seed does itself: it draws its photos and pins its defects without an HTTP upload.
+export { makeCloseup, prepareMaster };
+
+/**
+ * Cuts the close-up around a pin on one of the vehicle's photos, for the walk-around; null when the photo is not on
+ * this vehicle.
+ */
+export async function closeupOn(storage: Storage, db: DbOrTx, vehicleId: number, pin: { photoId: number; x: number; y: number }) {
+  const photo = await findPhoto(db, vehicleId, pin.photoId);
+  if (!photo) return null;
+  const closeupKey = await makeCloseup(storage, await storage.read(photo.masterKey), photo.width, photo.height, pin.x, pin.y);
+  return { photoId: photo.id, closeupKey };
 }
 
 export async function list(ctx: AppContext, actor: User, vehicleId: number) {
@@ -41,7 +60,7 @@ export async function list(ctx: AppContext, actor: User, vehicleId: number) {
  */
 export async function upload(ctx: AppContext, actor: User, vehicleId: number, files: UploadedFile[]) {
   await requireVehicle(ctx, actor, vehicleId);
-  const accepted: ReturnType<typeof presentPhoto>[] = [];
+  const accepted: PhotoView[] = [];
   const refused: Refusal[] = [];
   for (const file of files) {
     let master;
@@ -57,7 +76,7 @@ export async function upload(ctx: AppContext, actor: User, vehicleId: number, fi
     await ctx.storage.put(master.key, master.buffer);
     const row = await ctx.database.db.transaction(async (tx) => {
       // The vehicle row lock serialises uploads to one vehicle, so the count limit and positions hold.
-      await tx.select({ id: vehicles.id }).from(vehicles).where(eq(vehicles.id, vehicleId)).for("update");
+      await lockVehicle(tx, actor.dealershipId, vehicleId);
       const { count, lastPosition } = await photoCount(tx, vehicleId);
       if (count >= PHOTO_LIMITS.maxPhotosPerVehicle) return null;
       const [res] = await tx.insert(photos).values({
@@ -106,7 +125,7 @@ export async function update(ctx: AppContext, actor: User, vehicleId: number, ph
 export async function reorder(ctx: AppContext, actor: User, vehicleId: number, order: number[]) {
   await requireVehicle(ctx, actor, vehicleId);
   return ctx.database.db.transaction(async (tx) => {
-    await tx.select({ id: vehicles.id }).from(vehicles).where(eq(vehicles.id, vehicleId)).for("update");
+    await lockVehicle(tx, actor.dealershipId, vehicleId);
     const current = await photosOf(tx, vehicleId);
     const ids = current.map((p) => p.id).sort((a, b) => a - b);
     if (JSON.stringify([...order].sort((a, b) => a - b)) !== JSON.stringify(ids)) {

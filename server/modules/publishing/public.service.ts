@@ -2,7 +2,8 @@ import { and, asc, desc, eq, gte, inArray, like, lte, or, sql, type SQL } from "
 import type { AppContext } from "../../lib/context.ts";
 import { revisions, vehicles } from "../../db/schema/index.ts";
 import { AppError, notFound } from "../../lib/errors.ts";
-import { presentPublicDealership, primaryDealership } from "../dealerships/dealerships.service.ts";
+import { primaryDealership } from "../dealerships/dealerships.service.ts";
+import { presentPublicDealership } from "../dealerships/dealerships.presenter.ts";
 import type { PublicListQuery, PublicSort } from "../../../shared/schemas/public-query.ts";
 import type { PublicStatus, PublicVehicle, PublicVehicleCard, RevisionSummary } from "../../../shared/schemas/public.ts";
 import type { Revision } from "../../db/schema/index.ts";

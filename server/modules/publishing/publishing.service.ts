@@ -1,20 +1,22 @@
-import { desc, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import type { DbOrTx } from "../../db/client.ts";
 import { revisionMedia, revisions, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
-import { AppError, conflict, forbidden, notFound, staleVersion } from "../../lib/errors.ts";
-import { recordAudit } from "../audit/audit.service.ts";
+import { AppError, conflict, forbidden, staleVersion } from "../../lib/errors.ts";
+import { actorOf, recordAudit } from "../audit/audit.service.ts";
 import { getDealership, todayFor } from "../dealerships/dealerships.service.ts";
-import { evidenceOf, type Evidence } from "../condition/condition.service.ts";
-import { findVehicle } from "../vehicles/vehicles.queries.ts";
-import { deriveFor } from "../vehicles/derive.ts";
+import { evidenceOf } from "../condition/condition.service.ts";
+import type { Evidence } from "../condition/condition.presenter.ts";
+import { deriveFor, lockVehicle, recordView, requireVehicle } from "../vehicles/vehicles.service.ts";
 import { readiness, type Readiness } from "../../../shared/domain/readiness.ts";
 import { validateVinStructure, vinCheck } from "../../../shared/domain/vin.ts";
 import { ROAD_POSITIONS } from "../../../shared/domain/tyre-assessment.ts";
 import { describeChanges } from "../../../shared/domain/revision-changes.ts";
 import type { VehicleStatus } from "../../../shared/constants/vehicle.ts";
 import { buildSnapshot, mediaKeysOf } from "./snapshot.ts";
+import { latestRevision, revisionsOf } from "./publishing.queries.ts";
+import { presentPublishing, presentPublishResult, presentVehicleDetail, type PublishingView } from "./publishing.presenter.ts";
 
 const PUBLISHABLE_FROM: readonly VehicleStatus[] = ["preparing", "live", "reserved", "withdrawn"];
 
@@ -43,11 +45,6 @@ const slugify = (s: string) =>
 
 export const slugFor = (v: Pick<Vehicle, "buildYear" | "make" | "model" | "stockNumber">) => slugify([v.buildYear, v.make, v.model, v.stockNumber].filter(Boolean).join(" "));
 
-export async function latestRevision(db: DbOrTx, vehicleId: number) {
-  const [row] = await db.select().from(revisions).where(eq(revisions.vehicleId, vehicleId)).orderBy(desc(revisions.number)).limit(1);
-  return row ?? null;
-}
-
 export interface PublishInput {
   version?: number;
   overrideReason?: string;
@@ -60,8 +57,7 @@ export interface PublishInput {
  */
 export async function publish(ctx: AppContext, actor: User, vehicleId: number, input: PublishInput) {
   return ctx.database.db.transaction(async (tx) => {
-    const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
-    if (!v) throw notFound("That vehicle");
+    const v = await lockVehicle(tx, actor.dealershipId, vehicleId);
     if (input.version !== undefined && input.version !== v.version) throw staleVersion({ version: v.version, status: v.status });
     if (!PUBLISHABLE_FROM.includes(v.status)) {
       throw conflict(`A vehicle that is ${v.status} cannot be published. ${v.status === "intake" ? "Start preparing it first." : ""}`.trim(), { status: v.status }, "illegal_move");
@@ -103,28 +99,30 @@ export async function publish(ctx: AppContext, actor: User, vehicleId: number, i
     if (goesLive) {
       await tx.insert(vehicleEvents).values({ vehicleId: v.id, fromStatus: v.status, toStatus: "live", note: overrideReason ? `Published over a block: ${overrideReason}` : `Published revision ${number}`, userId: actor.id, userName: actor.name });
     }
-    await recordAudit(tx, { id: actor.id, email: actor.email, dealershipId: actor.dealershipId }, {
+    await recordAudit(tx, actorOf(actor), {
       action: overrideReason ? "published_with_override" : "published",
       entityType: "vehicle",
       entityId: v.id,
       after: { revision: number, slug, changes, ...(overrideReason ? { overrideReason, missing: ready.missing.map((m) => m.code) } : {}) },
     });
-    const url = `${ctx.config.publicUrl}/vehicles/${slug}`;
-    return { revision: { number, publishedAt: now.toISOString(), changes, overrideReason }, slug, url };
+    return presentPublishResult({ number, publishedAt: now, changes, overrideReason }, slug, ctx.config.publicUrl);
   });
 }
 
 /** The staff view of a vehicle's publishing: readiness now, and every revision with who published it. */
-export async function publishingOf(db: DbOrTx, v: Vehicle, d: Dealership, evidence: Evidence, publicUrl: string) {
-  const list = await db
-    .select({ number: revisions.number, publishedAt: revisions.publishedAt, publishedByName: revisions.publishedByName, overrideReason: revisions.overrideReason, changes: revisions.changes })
-    .from(revisions)
-    .where(eq(revisions.vehicleId, v.id))
-    .orderBy(desc(revisions.number));
-  return {
-    readiness: readinessOf(v, d, evidence),
-    slug: v.publicSlug,
-    url: v.publicSlug ? `${publicUrl}/vehicles/${v.publicSlug}` : null,
-    revisions: list.map((r) => ({ ...r, publishedAt: r.publishedAt.toISOString() })),
-  };
+export async function publishingOf(db: DbOrTx, v: Vehicle, d: Dealership, evidence: Evidence, publicUrl: string): Promise<PublishingView> {
+  return presentPublishing(v, readinessOf(v, d, evidence), await revisionsOf(db, v.id), publicUrl);
+}
+
+/**
+ * GET /api/vehicles/:id: the record, its evidence, readiness and revisions. Composed here because publishing already
+ * depends on vehicles and condition; the vehicles module answers the record alone (vehicles.service.ts get).
+ */
+export async function vehicleDetail(ctx: AppContext, actor: User, id: number) {
+  const { db } = ctx.database;
+  const v = await requireVehicle(db, actor.dealershipId, id);
+  const d = await getDealership(db, actor.dealershipId);
+  const evidence = await evidenceOf(db, d, v);
+  const publishing = await publishingOf(db, v, d, evidence, ctx.config.publicUrl);
+  return presentVehicleDetail(recordView(ctx, v, d), evidence, publishing);
 }

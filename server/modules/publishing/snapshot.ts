@@ -2,8 +2,8 @@ import type { Dealership, Vehicle } from "../../db/schema/index.ts";
 import type { Derived } from "../../../shared/domain/derived.ts";
 import type { PublicSnapshot } from "../../../shared/schemas/public.ts";
 import { renderMarkdown } from "../../../shared/markdown.ts";
-import { presentPublicDealership } from "../dealerships/dealerships.service.ts";
-import type { Evidence } from "../condition/condition.service.ts";
+import { presentPublicDealership } from "../dealerships/dealerships.presenter.ts";
+import type { Evidence } from "../condition/condition.presenter.ts";
 
 /** Media keys behind the /media/ URLs a snapshot shows, so the clean-up keeps their files. */
 export function mediaKeysOf(snapshot: PublicSnapshot): string[] {

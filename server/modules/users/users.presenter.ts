@@ -1,5 +1,4 @@
 import type { User as DbUser } from "../../db/schema/index.ts";
-import type { SessionUser } from "../../../shared/schemas/auth.ts";
 import type { UserView } from "../../../shared/schemas/users.ts";
 
 /** The fields of a user that leave the server; never the password hash. */
@@ -16,6 +15,5 @@ export function presentUser(user: DbUser): UserView {
   };
 }
 
-export function presentSessionUser(user: { id: string; email: string; name: string; role: SessionUser["role"] }): SessionUser {
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
-}
+// The session's user is the auth module's answer; auth.routes.ts still imports it from here.
+export { presentSessionUser } from "../auth/auth.presenter.ts";

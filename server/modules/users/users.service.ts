@@ -5,12 +5,10 @@ import type { AppContext } from "../../lib/context.ts";
 import { users } from "../../db/schema/index.ts";
 import { badRequest, conflict, notFound, staleVersion } from "../../lib/errors.ts";
 import { hashPassword, weakPasswordReason } from "../auth/password.ts";
-import { diffFields, recordAudit } from "../audit/audit.service.ts";
+import { actorOf, diffFields, recordAudit } from "../audit/audit.service.ts";
 import type { CreateUserInput, UpdateUserInput } from "../../../shared/schemas/users.ts";
 import { countActiveAdmins, findUser, listUsers } from "./users.queries.ts";
 import { presentUser } from "./users.presenter.ts";
-
-const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
 
 function checkPassword(password: string, email: string) {
   const reason = weakPasswordReason(password, email);

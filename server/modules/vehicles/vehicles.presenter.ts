@@ -1,6 +1,11 @@
-import type { Vehicle } from "../../db/schema/index.ts";
+import type { AuditEntry, Vehicle, vehicleEvents } from "../../db/schema/index.ts";
 import type { Derived } from "../../../shared/domain/derived.ts";
+import { STORED_FIELD_NAMES } from "../../../shared/constants/vehicle-fields.ts";
 import { wholeDaysBetween } from "../../lib/clock.ts";
+
+/** Every catalogued input field under its own name (shared/constants/vehicle-field-catalogue.ts). */
+const fieldsOf = (v: Vehicle) =>
+  Object.fromEntries(STORED_FIELD_NAMES.map((f) => [f, v[f]])) as { [K in (typeof STORED_FIELD_NAMES)[number]]: Vehicle[K] };
 
 /** The staff view of a vehicle: every input field by name, the derived block, and bookkeeping. */
 export function presentVehicle(v: Vehicle, derived: Derived, now: Date) {
@@ -8,41 +13,8 @@ export function presentVehicle(v: Vehicle, derived: Derived, now: Date) {
     id: v.id,
     stockNumber: v.stockNumber,
     status: v.status,
-    vin: v.vin,
-    registrationPlate: v.registrationPlate,
-    make: v.make,
-    model: v.model,
-    variant: v.variant,
-    buildYear: v.buildYear,
-    firstRegistrationDate: v.firstRegistrationDate,
-    bodyType: v.bodyType,
-    colour: v.colour,
-    doors: v.doors,
-    seats: v.seats,
-    odometerReading: v.odometerReading,
-    odometerUnit: v.odometerUnit,
+    ...fieldsOf(v),
     odometerKm: v.odometerKmIndex,
-    driveType: v.driveType,
-    fuelType: v.fuelType,
-    engineCapacityCc: v.engineCapacityCc,
-    cylinders: v.cylinders,
-    aspiration: v.aspiration,
-    powerKw: v.powerKw,
-    torqueNm: v.torqueNm,
-    transmission: v.transmission,
-    gears: v.gears,
-    fuelTankLitres: v.fuelTankLitres,
-    fuelConsumptionL100km: v.fuelConsumptionL100km,
-    consumptionTestCycle: v.consumptionTestCycle,
-    batteryKwh: v.batteryKwh,
-    energyKwh100km: v.energyKwh100km,
-    kerbWeightKg: v.kerbWeightKg,
-    keysCount: v.keysCount,
-    previousOwners: v.previousOwners,
-    features: v.features,
-    priceCents: v.priceCents,
-    description: v.description,
-    serviceHistory: v.serviceHistory,
     derived,
     daysInStock: wholeDaysBetween(v.stockedAt, now),
     stockedAt: v.stockedAt.toISOString(),
@@ -80,3 +52,31 @@ export function presentVehicleRow(v: Vehicle, now: Date) {
   };
 }
 export type VehicleRow = ReturnType<typeof presentVehicleRow>;
+
+/** The record as a write returns it (the detail read adds evidence, readiness and publishing: publishing.presenter.ts). */
+export type VehicleRecord = VehicleView;
+
+/** GET /api/vehicles: one page of the stock table. */
+export function presentVehicleList(page: { rows: Vehicle[]; total: number; page: number; pageSize: number }, now: Date) {
+  return {
+    vehicles: page.rows.map((r) => presentVehicleRow(r, now)),
+    total: page.total,
+    page: page.page,
+    pageSize: page.pageSize,
+    pageCount: Math.max(1, Math.ceil(page.total / page.pageSize)),
+  };
+}
+export type VehicleList = ReturnType<typeof presentVehicleList>;
+
+/** GET /api/vehicles/:id/history: status moves and the audit trail, newest first. */
+export function presentVehicleHistory(events: Array<typeof vehicleEvents.$inferSelect>, audit: AuditEntry[]) {
+  return {
+    statusHistory: events.map((e) => ({ from: e.fromStatus, to: e.toStatus, note: e.note, by: e.userName, at: e.at.toISOString() })),
+    audit: audit.map((a) => ({ action: a.action, by: a.userEmail, at: a.at.toISOString(), before: a.before, after: a.after })),
+  };
+}
+export type VehicleHistory = ReturnType<typeof presentVehicleHistory>;
+
+/** GET /api/vehicles/suggestions: feature tags used before and the makes in stock, for the editor. */
+export const presentSuggestions = (features: string[], makes: Array<{ make: string }>) => ({ features, makes: makes.map((m) => m.make) });
+export type VehicleSuggestions = ReturnType<typeof presentSuggestions>;

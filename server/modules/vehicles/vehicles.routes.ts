@@ -4,6 +4,7 @@ import { route } from "../../middleware/route.ts";
 import { vehicleIdParams } from "../../../shared/schemas/common.ts";
 import { createVehicleSchema, statusMoveSchema, updateVehicleSchema, vehicleListQuerySchema, vehicleSuggestionsQuerySchema } from "../../../shared/schemas/vehicles.ts";
 import * as service from "./vehicles.service.ts";
+import { vehicleDetail } from "../publishing/publishing.service.ts";
 
 export function vehiclesRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -20,7 +21,7 @@ export function vehiclesRoutes(ctx: AppContext): Router {
     })),
   );
 
-  router.get("/:id", ...route({ allow: "vehicles.read", params: vehicleIdParams }, async ({ user, params }) => ({ vehicle: await service.get(ctx, user, params.id) })));
+  router.get("/:id", ...route({ allow: "vehicles.read", params: vehicleIdParams }, async ({ user, params }) => ({ vehicle: await vehicleDetail(ctx, user, params.id) })));
 
   router.get("/:id/history", ...route({ allow: "vehicles.read", params: vehicleIdParams }, ({ user, params }) => service.history(ctx, user, params.id)));
 

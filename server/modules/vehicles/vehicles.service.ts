@@ -5,24 +5,35 @@ import type { DbOrTx } from "../../db/client.ts";
 import type { DealershipDay } from "../../lib/clock.ts";
 import { dealerships, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
 import { AppError, badRequest, conflict, forbidden, notFound, staleVersion } from "../../lib/errors.ts";
-import { auditFor, diffFields, recordAudit } from "../audit/audit.service.ts";
+import { actorOf, auditFor, diffFields, recordAudit } from "../audit/audit.service.ts";
 import { getDealership, todayFor } from "../dealerships/dealerships.service.ts";
 import { vinCheck } from "../../../shared/domain/vin.ts";
 import { checkStatusMove } from "../../../shared/domain/status.ts";
 import { forbiddenFields } from "../../../shared/constants/vehicle-fields.ts";
 import type { CreateVehicleInput, StatusMoveInput, UpdateVehicleInput, VehicleListQuery } from "../../../shared/schemas/vehicles.ts";
-import { evidenceOf } from "../condition/condition.service.ts";
-import { publishingOf } from "../publishing/publishing.service.ts";
 import { eventsFor, featureSuggestions, findVehicle, listVehicles, makesInStock } from "./vehicles.queries.ts";
-import { presentVehicle, presentVehicleRow } from "./vehicles.presenter.ts";
-
-const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
-
-export { todayFor };
-
+import { presentSuggestions, presentVehicle, presentVehicleHistory, presentVehicleList } from "./vehicles.presenter.ts";
 import { deriveFor, odometerKmOf, type Stored } from "./derive.ts";
 
+// Other modules reach the vehicle through these, never through vehicles.queries.ts.
 export { deriveFor };
+
+/** The vehicle of this dealership, or 404: other dealerships' vehicles do not exist for this user. */
+export async function requireVehicle(db: DbOrTx, dealershipId: number, id: number): Promise<Vehicle> {
+  const v = await findVehicle(db, dealershipId, id);
+  if (!v) throw notFound("That vehicle");
+  return v;
+}
+
+/**
+ * The vehicle locked for the rest of the transaction (SELECT … FOR UPDATE), or 404. Every write that counts, numbers or
+ * versions something on a vehicle takes this lock first, so concurrent writes to one vehicle queue up.
+ */
+export async function lockVehicle(tx: DbOrTx, dealershipId: number, id: number): Promise<Vehicle> {
+  const v = await findVehicle(tx, dealershipId, id, true);
+  if (!v) throw notFound("That vehicle");
+  return v;
+}
 
 /** Maps validated input to columns. The odometer keeps the unit it was read in; a km figure is kept beside it for sorting. */
 function toColumns(input: Partial<CreateVehicleInput>, defaultUnit: "km" | "mi"): Partial<Stored> {
@@ -56,31 +67,28 @@ async function nextStockNumber(tx: DbOrTx, dealershipId: number): Promise<string
 }
 
 export async function list(ctx: AppContext, actor: User, query: VehicleListQuery) {
-  const { rows, total, page, pageSize } = await listVehicles(ctx.database.db, actor.dealershipId, query);
-  const now = ctx.now();
-  return { vehicles: rows.map((r) => presentVehicleRow(r, now)), total, page, pageSize, pageCount: Math.max(1, Math.ceil(total / pageSize)) };
+  return presentVehicleList(await listVehicles(ctx.database.db, actor.dealershipId, query), ctx.now());
 }
 
+/**
+ * The record with its derived figures, recomputed on read as well: "overdue" depends on today, not on the day of the
+ * last save. The detail page's evidence, readiness and revisions are added by the publishing module, which depends
+ * on this one (publishing.service.ts vehicleDetail), so this module never calls back up.
+ */
 export async function get(ctx: AppContext, actor: User, id: number) {
   const { db } = ctx.database;
-  const v = await findVehicle(db, actor.dealershipId, id);
-  if (!v) throw notFound("That vehicle");
-  const d = await getDealership(db, actor.dealershipId);
-  // Recomputed on read as well: "overdue" depends on today, not on the day of the last save.
-  const evidence = await evidenceOf(db, d, v);
-  const publishing = await publishingOf(db, v, d, evidence, ctx.config.publicUrl);
-  return { ...presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now()), evidence, readiness: publishing.readiness, publishing };
+  const v = await requireVehicle(db, actor.dealershipId, id);
+  return recordView(ctx, v, await getDealership(db, actor.dealershipId));
 }
+
+/** The staff view of a vehicle row with its derived figures as of the dealership's today. */
+export const recordView = (ctx: AppContext, v: Vehicle, d: Dealership) => presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now());
 
 export async function history(ctx: AppContext, actor: User, id: number) {
   const { db } = ctx.database;
-  const v = await findVehicle(db, actor.dealershipId, id);
-  if (!v) throw notFound("That vehicle");
+  await requireVehicle(db, actor.dealershipId, id);
   const [events, audit] = await Promise.all([eventsFor(db, id), auditFor(db, actor.dealershipId, "vehicle", String(id))]);
-  return {
-    statusHistory: events.map((e) => ({ from: e.fromStatus, to: e.toStatus, note: e.note, by: e.userName, at: e.at.toISOString() })),
-    audit: audit.map((a) => ({ action: a.action, by: a.userEmail, at: a.at.toISOString(), before: a.before, after: a.after })),
-  };
+  return presentVehicleHistory(events, audit);
 }
 
 export async function create(ctx: AppContext, actor: User, input: CreateVehicleInput, day: DealershipDay) {
@@ -125,8 +133,7 @@ export async function update(ctx: AppContext, actor: User, id: number, input: Up
     throw new AppError(403, "forbidden_fields", `Your role cannot change: ${refused.join(", ")}.`, Object.fromEntries(refused.map((f) => [f, "Your role cannot change this field."])));
   }
   return ctx.database.db.transaction(async (tx) => {
-    const current = await findVehicle(tx, actor.dealershipId, id, true);
-    if (!current) throw notFound("That vehicle");
+    const current = await lockVehicle(tx, actor.dealershipId, id);
     if (current.version !== version) throw staleVersion(presentVehicle(current, deriveFor(current, d, today), ctx.now()));
     if ("vin" in changes) enforceVin(changes.vin, d);
     const columns = toColumns(changes, current.odometerUnit);
@@ -145,10 +152,9 @@ export async function update(ctx: AppContext, actor: User, id: number, input: Up
 
 export async function moveStatus(ctx: AppContext, actor: User, id: number, input: StatusMoveInput) {
   return ctx.database.db.transaction(async (tx) => {
-    const current = await findVehicle(tx, actor.dealershipId, id, true);
-    if (!current) throw notFound("That vehicle");
+    const current = await lockVehicle(tx, actor.dealershipId, id);
     const d = await getDealership(tx, actor.dealershipId);
-    if (current.version !== input.version) throw staleVersion(presentVehicle(current, deriveFor(current, d, todayFor(ctx, d)), ctx.now()));
+    if (current.version !== input.version) throw staleVersion(recordView(ctx, current, d));
     const verdict = checkStatusMove(current.status, input.to, actor.role);
     if (!verdict.ok) {
       if (verdict.code === "role") throw forbidden(verdict.reason);
@@ -157,8 +163,7 @@ export async function moveStatus(ctx: AppContext, actor: User, id: number, input
     await tx.update(vehicles).set({ status: input.to, version: current.version + 1 }).where(eq(vehicles.id, id));
     await tx.insert(vehicleEvents).values({ vehicleId: id, fromStatus: current.status, toStatus: input.to, note: input.note ?? "", userId: actor.id, userName: actor.name });
     await recordAudit(tx, actorOf(actor), { action: "status_moved", entityType: "vehicle", entityId: id, before: { status: current.status }, after: { status: input.to, note: input.note ?? null } });
-    const row = (await findVehicle(tx, d.id, id))!;
-    return presentVehicle(row, deriveFor(row, d, todayFor(ctx, d)), ctx.now());
+    return recordView(ctx, (await findVehicle(tx, d.id, id))!, d);
   });
 }
 
@@ -167,5 +172,5 @@ export async function suggestions(ctx: AppContext, actor: User, prefix: string) 
     featureSuggestions(ctx.database.db, actor.dealershipId, prefix),
     makesInStock(ctx.database.db, actor.dealershipId),
   ]);
-  return { features, makes: makes.map((m) => m.make) };
+  return presentSuggestions(features, makes);
 }

@@ -1,64 +1,42 @@
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import type { DbOrTx } from "../../db/client.ts";
-import { defects, vehicles, zoneMarks, type Defect } from "../../db/schema/index.ts";
+import { defects, vehicles, zoneMarks } from "../../db/schema/index.ts";
 import { badRequest, conflict, notFound, staleVersion } from "../../lib/errors.ts";
-import { diffFields, recordAudit } from "../audit/audit.service.ts";
-import { ZONES, type Zone } from "../../../shared/constants/evidence.ts";
+import { actorOf, diffFields, recordAudit } from "../audit/audit.service.ts";
+import type { Zone } from "../../../shared/constants/evidence.ts";
 import type { CreateDefectInput, UpdateDefectInput } from "../../../shared/schemas/evidence.ts";
-import { findVehicle } from "../vehicles/vehicles.queries.ts";
-import { findPhoto } from "../photos/photos.queries.ts";
-import { makeCloseup } from "../photos/photo-pipeline.ts";
-import { presentDefect } from "./walkaround.presenter.ts";
+import { lockVehicle, requireVehicle } from "../vehicles/vehicles.service.ts";
+import { closeupOn } from "../photos/photos.service.ts";
+import { defectsOf, marksOf } from "./walkaround.queries.ts";
+import { presentDefect, presentWalkaround, zoneStates } from "./walkaround.presenter.ts";
 
-const actorOf = (u: User) => ({ id: u.id, email: u.email, dealershipId: u.dealershipId });
-
-export const defectsOf = (db: DbOrTx, vehicleId: number) => db.select().from(defects).where(eq(defects.vehicleId, vehicleId)).orderBy(asc(defects.number));
-export const marksOf = (db: DbOrTx, vehicleId: number) => db.select().from(zoneMarks).where(eq(zoneMarks.vehicleId, vehicleId));
-
-/** Each zone: checked with nothing found, checked with defects, or still to check. */
-export function zoneStates(defectRows: Pick<Defect, "zone">[], marks: Array<{ zone: Zone; checkedBy: string | null; checkedAt: Date }>) {
-  return ZONES.map((zone) => {
-    const count = defectRows.filter((d) => d.zone === zone).length;
-    const mark = marks.find((m) => m.zone === zone);
-    return {
-      zone,
-      state: count > 0 ? ("defects" as const) : mark ? ("nothing_found" as const) : ("unchecked" as const),
-      defects: count,
-      checkedBy: mark?.checkedBy ?? null,
-      checkedAt: mark?.checkedAt.toISOString() ?? null,
-    };
-  });
-}
-
-async function lockVehicle(ctx: AppContext, tx: DbOrTx, actor: User, vehicleId: number) {
-  const v = await findVehicle(tx, actor.dealershipId, vehicleId, true);
-  if (!v) throw notFound("That vehicle");
-  return v;
+/** The front door for other modules: a vehicle's defects (by number) and zone marks, read with the caller's db or tx. */
+export async function walkaroundRecordsOf(db: DbOrTx, vehicleId: number) {
+  const [rows, marks] = await Promise.all([defectsOf(db, vehicleId), marksOf(db, vehicleId)]);
+  return { defects: rows, marks };
 }
 
 /** Validates a pin against the vehicle's photos and cuts the close-up; null clears it. */
 async function pinColumns(ctx: AppContext, tx: DbOrTx, vehicleId: number, pin: CreateDefectInput["pin"]) {
   if (pin === undefined) return {};
   if (pin === null) return { photoId: null, pinX: null, pinY: null, closeupKey: null };
-  const photo = await findPhoto(tx, vehicleId, pin.photoId);
-  if (!photo) throw badRequest("The pin must be on one of this vehicle's photos.", { "pin.photoId": "That photo is not on this vehicle." });
-  const master = await ctx.storage.read(photo.masterKey);
-  const closeupKey = await makeCloseup(ctx.storage, master, photo.width, photo.height, pin.x, pin.y);
-  return { photoId: photo.id, pinX: pin.x, pinY: pin.y, closeupKey };
+  const cut = await closeupOn(ctx.storage, tx, vehicleId, pin);
+  if (!cut) throw badRequest("The pin must be on one of this vehicle's photos.", { "pin.photoId": "That photo is not on this vehicle." });
+  return { photoId: cut.photoId, pinX: pin.x, pinY: pin.y, closeupKey: cut.closeupKey };
 }
 
 export async function walkaround(ctx: AppContext, actor: User, vehicleId: number) {
   const { db } = ctx.database;
-  if (!(await findVehicle(db, actor.dealershipId, vehicleId))) throw notFound("That vehicle");
-  const [rows, marks] = await Promise.all([defectsOf(db, vehicleId), marksOf(db, vehicleId)]);
-  return { defects: rows.map(presentDefect), zones: zoneStates(rows, marks) };
+  await requireVehicle(db, actor.dealershipId, vehicleId);
+  const { defects: rows, marks } = await walkaroundRecordsOf(db, vehicleId);
+  return presentWalkaround(rows, marks);
 }
 
 export async function createDefect(ctx: AppContext, actor: User, vehicleId: number, input: CreateDefectInput) {
   return ctx.database.db.transaction(async (tx) => {
-    const v = await lockVehicle(ctx, tx, actor, vehicleId);
+    const v = await lockVehicle(tx, actor.dealershipId, vehicleId);
     const pin = await pinColumns(ctx, tx, vehicleId, input.pin);
     const number = v.lastDefectNumber + 1;
     await tx.update(vehicles).set({ lastDefectNumber: number }).where(eq(vehicles.id, vehicleId));
@@ -74,7 +52,7 @@ export async function createDefect(ctx: AppContext, actor: User, vehicleId: numb
 
 export async function updateDefect(ctx: AppContext, actor: User, vehicleId: number, defectId: number, input: UpdateDefectInput) {
   return ctx.database.db.transaction(async (tx) => {
-    await lockVehicle(ctx, tx, actor, vehicleId);
+    await lockVehicle(tx, actor.dealershipId, vehicleId);
     const [current] = await tx.select().from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.id, defectId))).for("update");
     if (!current) throw notFound("That defect");
     if (current.version !== input.version) throw staleVersion(presentDefect(current));
@@ -91,7 +69,7 @@ export async function updateDefect(ctx: AppContext, actor: User, vehicleId: numb
 
 export async function deleteDefect(ctx: AppContext, actor: User, vehicleId: number, defectId: number, version: number) {
   await ctx.database.db.transaction(async (tx) => {
-    await lockVehicle(ctx, tx, actor, vehicleId);
+    await lockVehicle(tx, actor.dealershipId, vehicleId);
     const [current] = await tx.select().from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.id, defectId))).for("update");
     if (!current) throw notFound("That defect");
     if (current.version !== version) throw staleVersion(presentDefect(current));
@@ -103,7 +81,7 @@ export async function deleteDefect(ctx: AppContext, actor: User, vehicleId: numb
 /** Marks a zone "checked, nothing found", or clears the mark. A zone with defects cannot be marked clear. */
 export async function markZone(ctx: AppContext, actor: User, vehicleId: number, zone: Zone, nothingFound: boolean) {
   return ctx.database.db.transaction(async (tx) => {
-    await lockVehicle(ctx, tx, actor, vehicleId);
+    await lockVehicle(tx, actor.dealershipId, vehicleId);
     const [{ n }] = (await tx.select({ n: sql<number>`count(*)` }).from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.zone, zone)))) as [{ n: number }];
     if (nothingFound && Number(n) > 0) throw conflict("This zone has defects recorded, so it cannot be marked as nothing found.", undefined, "zone_has_defects");
     await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, zone)));

@@ -1,6 +1,6 @@
 import sharp from "sharp";
 import { describe, expect, it } from "vitest";
-import { ANGLES, ANGLE_ZONE, colourToHex, demoPhotoSvg, renderDemoPhoto } from "../../../server/db/seed/art/index.ts";
+import { ANGLES, ANGLE_ZONE, colourToHex, demoPhotoSvg, renderDemoPhoto } from "../../../server/demo/art/index.ts";
 import { BODY_TYPES } from "../../../shared/constants/vehicle.ts";
 
 const COLOURS = ["White", "Slate grey", "Deep red", "Silver", "Black", "Blue", "Green", "Sand", "Bronze", "Dark blue", "Grey", "Red", "Yellow", "Orange"];

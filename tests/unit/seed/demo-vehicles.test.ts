@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { en } from "@faker-js/faker";
 import { describe, expect, it } from "vitest";
-import { demoVehicles, type DemoVehicle } from "../../../server/db/seed/demo-vehicles.ts";
+import { demoVehicles, type DemoVehicle } from "../../../server/demo/demo-vehicles.ts";
 import { VEHICLE_STATUSES } from "../../../shared/constants/vehicle.ts";
 import { dayNumber, parseIsoDate } from "../../../shared/domain/calendar.ts";
 import { rangeKm } from "../../../shared/domain/range.ts";
@@ -182,7 +182,7 @@ describe("demo vehicles", () => {
   });
 
   it("when the seed source is read, then it never calls faker's vehicle module", () => {
-    const source = readFileSync(new URL("../../../server/db/seed/demo-vehicles.ts", import.meta.url), "utf8");
+    const source = readFileSync(new URL("../../../server/demo/demo-vehicles.ts", import.meta.url), "utf8");
     expect(source).not.toMatch(/\bfaker\s*\.\s*vehicle\b/);
     expect(source).not.toMatch(/\ben\s*\.\s*vehicle\b/);
   });

@@ -1,0 +1,44 @@
+import type { Vehicle } from "../../db/schema/index.ts";
+import type { Readiness } from "../../../shared/domain/readiness.ts";
+import type { Evidence } from "../condition/condition.presenter.ts";
+import type { VehicleRecord } from "../vehicles/vehicles.presenter.ts";
+
+export const publicUrlOf = (publicUrl: string, slug: string) => `${publicUrl}/vehicles/${slug}`;
+
+/** The staff view of a vehicle's publishing: readiness now, and every revision with who published it. */
+export function presentPublishing(
+  v: Pick<Vehicle, "publicSlug">,
+  readiness: Readiness,
+  revisions: Array<{ number: number; publishedAt: Date; publishedByName: string | null; overrideReason: string | null; changes: string[] }>,
+  publicUrl: string,
+) {
+  return {
+    readiness,
+    slug: v.publicSlug,
+    url: v.publicSlug ? publicUrlOf(publicUrl, v.publicSlug) : null,
+    revisions: revisions.map((r) => ({ ...r, publishedAt: r.publishedAt.toISOString() })),
+  };
+}
+export type PublishingView = ReturnType<typeof presentPublishing>;
+
+/** POST /api/vehicles/:id/publish (201): the revision just written and where buyers read it. */
+export function presentPublishResult(revision: { number: number; publishedAt: Date; changes: string[]; overrideReason: string | null }, slug: string, publicUrl: string) {
+  return {
+    revision: { number: revision.number, publishedAt: revision.publishedAt.toISOString(), changes: revision.changes, overrideReason: revision.overrideReason },
+    slug,
+    url: publicUrlOf(publicUrl, slug),
+  };
+}
+export type PublishResult = ReturnType<typeof presentPublishResult>;
+
+/**
+ * GET /api/vehicles/:id (inside `{ vehicle }`): the record with its evidence, readiness and publishing. Composed here,
+ * in the module that depends on vehicles and condition, so neither of them calls back up.
+ */
+export const presentVehicleDetail = (record: VehicleRecord, evidence: Evidence, publishing: PublishingView) => ({
+  ...record,
+  evidence,
+  readiness: publishing.readiness,
+  publishing,
+});
+export type VehicleDetail = ReturnType<typeof presentVehicleDetail>;
