@@ -44,5 +44,3 @@ export function assessTyre(reading: TyreReading, rules: { legalMinTreadMm: numbe
 
 /** Four road wheels measured (the spare is recorded when there is one, but not required). */
 export const ROAD_POSITIONS = ["front_left", "front_right", "rear_left", "rear_right"] as const;
-export const allRoadTyresMeasured = (assessments: readonly TyreAssessment[]) =>
-  ROAD_POSITIONS.every((p) => assessments.some((a) => a.position === p && a.tread !== null));

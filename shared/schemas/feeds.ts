@@ -3,6 +3,7 @@
 import { z } from "zod";
 import { BODY_TYPES, FUEL_TYPES } from "../constants/vehicle.ts";
 import { PHOTO_WIDTHS } from "../constants/evidence.ts";
+import { feedColumnLabel, type FieldFeedColumn } from "../constants/vehicle-fields.ts";
 import { versionSchema } from "./common.ts";
 
 export const FEED_FORMATS = ["csv", "json", "jsonld", "xml"] as const;
@@ -27,44 +28,47 @@ export interface ColumnSpec {
   width?: boolean;
 }
 
+/** A column that carries one vehicle field, under the field catalogue's label for it. */
+const fieldColumn = <K extends FieldFeedColumn>(key: K) => ({ key, label: feedColumnLabel(key), group: "record" as const });
+
 /** Every column a CSV or XML feed may carry, in catalogue order. */
 export const FEED_COLUMNS = [
   { key: "stockNumber", label: "Stock number", group: "record" },
   { key: "status", label: "Status", group: "record" },
   { key: "title", label: "Title", group: "record" },
-  { key: "make", label: "Make", group: "record" },
-  { key: "model", label: "Model", group: "record" },
-  { key: "variant", label: "Variant", group: "record" },
-  { key: "buildYear", label: "Build year", group: "record" },
-  { key: "firstRegistrationDate", label: "First registered", group: "record" },
-  { key: "vin", label: "VIN", group: "record" },
-  { key: "bodyType", label: "Body type", group: "record" },
-  { key: "colour", label: "Colour", group: "record" },
-  { key: "doors", label: "Doors", group: "record" },
-  { key: "seats", label: "Seats", group: "record" },
-  { key: "driveType", label: "Drive", group: "record" },
-  { key: "fuelType", label: "Fuel", group: "record" },
-  { key: "transmission", label: "Transmission", group: "record" },
-  { key: "gears", label: "Gears", group: "record" },
-  { key: "engineCapacityCc", label: "Engine capacity (cc)", group: "record" },
-  { key: "cylinders", label: "Cylinders", group: "record" },
-  { key: "aspiration", label: "Aspiration", group: "record" },
-  { key: "powerKw", label: "Power (kW)", group: "record" },
-  { key: "torqueNm", label: "Torque (N·m)", group: "record" },
-  { key: "kerbWeightKg", label: "Kerb weight (kg)", group: "record" },
-  { key: "fuelTankLitres", label: "Fuel tank (L)", group: "record" },
-  { key: "fuelConsumption", label: "Fuel consumption (in the feed's units)", group: "record" },
+  fieldColumn("make"),
+  fieldColumn("model"),
+  fieldColumn("variant"),
+  fieldColumn("buildYear"),
+  fieldColumn("firstRegistrationDate"),
+  fieldColumn("vin"),
+  fieldColumn("bodyType"),
+  fieldColumn("colour"),
+  fieldColumn("doors"),
+  fieldColumn("seats"),
+  fieldColumn("driveType"),
+  fieldColumn("fuelType"),
+  fieldColumn("transmission"),
+  fieldColumn("gears"),
+  fieldColumn("engineCapacityCc"),
+  fieldColumn("cylinders"),
+  fieldColumn("aspiration"),
+  fieldColumn("powerKw"),
+  fieldColumn("torqueNm"),
+  fieldColumn("kerbWeightKg"),
+  fieldColumn("fuelTankLitres"),
+  fieldColumn("fuelConsumption"),
   { key: "fuelConsumptionUnit", label: "Fuel consumption unit", group: "record" },
-  { key: "batteryKwh", label: "Battery (kWh)", group: "record" },
-  { key: "energyKwh100km", label: "Energy use (kWh/100 km)", group: "record" },
-  { key: "odometer", label: "Odometer (in the feed's units)", group: "record" },
+  fieldColumn("batteryKwh"),
+  fieldColumn("energyKwh100km"),
+  fieldColumn("odometer"),
   { key: "distanceUnit", label: "Distance unit", group: "record" },
-  { key: "keysCount", label: "Keys", group: "record" },
-  { key: "previousOwners", label: "Previous owners", group: "record" },
-  { key: "features", label: "Features", group: "record" },
-  { key: "descriptionHtml", label: "Description (HTML)", group: "record" },
+  fieldColumn("keysCount"),
+  fieldColumn("previousOwners"),
+  fieldColumn("features"),
+  fieldColumn("descriptionHtml"),
   { key: "price", label: "Price", group: "record" },
-  { key: "priceCents", label: "Price in cents", group: "record" },
+  fieldColumn("priceCents"),
   { key: "currency", label: "Currency", group: "record" },
   { key: "daysInStock", label: "Days in stock", group: "record" },
   { key: "publishedAt", label: "Published at", group: "record" },

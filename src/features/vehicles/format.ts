@@ -1,4 +1,4 @@
-import { formatDistance, formatMoney, formatNumber, THIN_SPACE } from "../../../shared/domain/display.ts";
+import { formatMoney, formatNumber, THIN_SPACE } from "../../../shared/domain/display.ts";
 import { LABELS } from "../../../shared/constants/vehicle.ts";
 
 export const DASH = "—";
@@ -12,8 +12,6 @@ export const odometerText = (v: { odometerReading: number | null; odometerUnit: 
 
 export const priceText = (cents: number | null, currency: string, locale?: string) =>
   cents == null ? DASH : (formatMoney(cents, currency, locale) ?? DASH);
-
-export const distanceText = (km: number | null, unit: "km" | "mi", locale?: string) => formatDistance(km, unit, { locale }) ?? DASH;
 
 export const label = <K extends keyof typeof LABELS>(group: K, value: string | null | undefined): string =>
   value ? ((LABELS[group] as Record<string, string>)[value] ?? value) : DASH;

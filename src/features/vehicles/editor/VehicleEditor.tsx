@@ -1,6 +1,7 @@
 import { useEffect, useMemo, useRef, useState, type FormEvent } from "react";
 import { useNavigate } from "react-router";
 import { computeDerived } from "../../../../shared/domain/derived.ts";
+import { derivedInputOf } from "../../../../shared/domain/derived-input.ts";
 import { dealershipDay } from "../../../../shared/domain/calendar.ts";
 import { createVehicleSchema, updateVehicleSchema } from "../../../../shared/schemas/vehicles.ts";
 import { canEditGroup, fieldGroup } from "../../../../shared/constants/vehicle-fields.ts";
@@ -65,25 +66,8 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
   }, [dirty]);
 
   const derived = useMemo(() => {
-    const n = (k: string) => liveNumber(input[k]);
-    const odo = n("odometerReading");
     return computeDerived(
-      {
-        vin: typeof input.vin === "string" ? input.vin : null,
-        buildYear: n("buildYear"),
-        firstRegistrationDate: typeof input.firstRegistrationDate === "string" ? input.firstRegistrationDate : null,
-        odometerKm: odo == null ? null : input.odometerUnit === "mi" ? odo * 1.609344 : odo,
-        fuelType: (input.fuelType as never) ?? null,
-        powerKw: n("powerKw"),
-        torqueNm: n("torqueNm"),
-        fuelTankLitres: n("fuelTankLitres"),
-        fuelConsumptionL100km: n("fuelConsumptionL100km"),
-        consumptionTestCycle: (input.consumptionTestCycle as string) ?? null,
-        batteryKwh: n("batteryKwh"),
-        energyKwh100km: n("energyKwh100km"),
-        kerbWeightKg: n("kerbWeightKg"),
-        serviceHistory: (input.serviceHistory as Array<{ date: string; odometerKm: unknown; kind: string }>).map((e) => ({ ...e, odometerKm: liveNumber(e.odometerKm) })),
-      },
+      derivedInputOf(input),
       { today: dealershipDay(dealership.timeZone), checkDigitMandatory: dealership.vinCheckDigitMandatory, serviceIntervalKm: dealership.serviceIntervalKm, serviceIntervalMonths: dealership.serviceIntervalMonths },
     );
   }, [input, dealership]);

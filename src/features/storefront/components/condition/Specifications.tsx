@@ -12,6 +12,7 @@ import {
   withUnit,
   type ConsumptionUnit,
 } from "../../../../../shared/domain/display.ts";
+import { specLabel } from "../../../../../shared/constants/vehicle-fields.ts";
 import { dateText, label, odometerText, rangeText, yearText } from "../../format.ts";
 import { Qty } from "../Figure.tsx";
 import { Fact, Section } from "./Section.tsx";
@@ -52,17 +53,17 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
   const electric = s.fuelType === "plug_in_hybrid" ? rangeText(d.electricRangeKm, unit, locale) : null;
 
   const vehicle: Row[] = [
-    ["Make", s.make],
-    ["Model", s.model],
-    ["Variant", s.variant],
-    ["Build year", yearText(s.buildYear)],
-    ["First registered", dateText(s.firstRegistrationDate, locale)],
-    ["Body", label("bodyType", s.bodyType)],
-    ["Colour", s.colour],
-    ["Doors", s.doors !== null ? formatNumber(s.doors, o) : null],
-    ["Seats", s.seats !== null ? formatNumber(s.seats, o) : null],
+    [specLabel("make"), s.make],
+    [specLabel("model"), s.model],
+    [specLabel("variant"), s.variant],
+    [specLabel("buildYear"), yearText(s.buildYear)],
+    [specLabel("firstRegistrationDate"), dateText(s.firstRegistrationDate, locale)],
+    [specLabel("bodyType"), label("bodyType", s.bodyType)],
+    [specLabel("colour"), s.colour],
+    [specLabel("doors"), s.doors !== null ? formatNumber(s.doors, o) : null],
+    [specLabel("seats"), s.seats !== null ? formatNumber(s.seats, o) : null],
     [
-      "Odometer, as read",
+      specLabel("odometerReading"),
       has(s.odometer.reading) ? (
         <>
           <Qty text={odometerText(s.odometer.reading, s.odometer.unit, locale)} />
@@ -78,25 +79,25 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
         </>
       ) : null,
     ],
-    ["Previous owners", s.previousOwners !== null ? formatNumber(s.previousOwners, o) : null],
-    ["Keys", s.keysCount !== null ? formatNumber(s.keysCount, o) : null],
-    ["VIN", s.vin ? <span className="break-all font-mono font-normal">{s.vin}</span> : null],
+    [specLabel("previousOwners"), s.previousOwners !== null ? formatNumber(s.previousOwners, o) : null],
+    [specLabel("keysCount"), s.keysCount !== null ? formatNumber(s.keysCount, o) : null],
+    [specLabel("vin"), s.vin ? <span className="break-all font-mono font-normal">{s.vin}</span> : null],
     ["Stock number", <span className="font-mono font-normal">{s.stockNumber}</span>],
   ];
 
   const engine: Row[] = [
-    ["Fuel", label("fuelType", s.fuelType)],
-    ["Engine", s.engineCapacityCc !== null ? <Qty text={withUnit(s.engineCapacityCc, "cc", o)} /> : null],
-    ["Cylinders", s.cylinders !== null ? formatNumber(s.cylinders, o) : null],
-    ["Aspiration", label("aspiration", s.aspiration)],
-    ["Power", s.powerKw !== null ? <Several texts={[formatPower(s.powerKw, "kW", o), formatPower(s.powerKw, "hp", o), formatPower(s.powerKw, "PS", o)]} /> : null],
-    ["Torque", s.torqueNm !== null ? <Several texts={[formatTorque(s.torqueNm, "N·m", o), formatTorque(s.torqueNm, "lbf·ft", o)]} /> : null],
+    [specLabel("fuelType"), label("fuelType", s.fuelType)],
+    [specLabel("engineCapacityCc"), s.engineCapacityCc !== null ? <Qty text={withUnit(s.engineCapacityCc, "cc", o)} /> : null],
+    [specLabel("cylinders"), s.cylinders !== null ? formatNumber(s.cylinders, o) : null],
+    [specLabel("aspiration"), label("aspiration", s.aspiration)],
+    [specLabel("powerKw"), s.powerKw !== null ? <Several texts={[formatPower(s.powerKw, "kW", o), formatPower(s.powerKw, "hp", o), formatPower(s.powerKw, "PS", o)]} /> : null],
+    [specLabel("torqueNm"), s.torqueNm !== null ? <Several texts={[formatTorque(s.torqueNm, "N·m", o), formatTorque(s.torqueNm, "lbf·ft", o)]} /> : null],
     [
-      "Gearbox",
+      specLabel("transmission"),
       s.transmission ? `${label("transmission", s.transmission)}${s.gears !== null ? `, ${formatNumber(s.gears, o)} gears` : ""}` : null,
     ],
-    ["Drive", label("driveType", s.driveType)],
-    ["Kerb weight", s.kerbWeightKg !== null ? <Several texts={[formatMass(s.kerbWeightKg, "kg", o), big ? formatMass(s.kerbWeightKg, "lb", o) : null]} /> : null],
+    [specLabel("driveType"), label("driveType", s.driveType)],
+    [specLabel("kerbWeightKg"), s.kerbWeightKg !== null ? <Several texts={[formatMass(s.kerbWeightKg, "kg", o), big ? formatMass(s.kerbWeightKg, "lb", o) : null]} /> : null],
     [
       "Power to weight",
       d.powerToWeightKwPerTonne !== null ? (
@@ -108,9 +109,9 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
   ];
 
   const economy: Row[] = [
-    ["Fuel tank", s.fuelTankLitres !== null ? <Qty text={withUnit(s.fuelTankLitres, "L", { ...o, fractionDigits: oneDecimalIfNeeded(s.fuelTankLitres) })} /> : null],
+    [specLabel("fuelTankLitres"), s.fuelTankLitres !== null ? <Qty text={withUnit(s.fuelTankLitres, "L", { ...o, fractionDigits: oneDecimalIfNeeded(s.fuelTankLitres) })} /> : null],
     [
-      "Fuel use",
+      specLabel("fuelConsumptionL100km"),
       s.fuelType !== "electric" && s.fuelConsumptionL100km !== null ? (
         <>
           <Several texts={[formatConsumption(s.fuelConsumptionL100km, "l100km", o), ...mpgOrder.map((u) => formatConsumption(s.fuelConsumptionL100km, u, o))]} />
@@ -118,8 +119,8 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
         </>
       ) : null,
     ],
-    ["Battery", s.batteryKwh !== null ? <Qty text={withUnit(s.batteryKwh, "kWh", { ...o, fractionDigits: oneDecimalIfNeeded(s.batteryKwh) })} /> : null],
-    ["Energy use", s.energyKwh100km !== null ? <Qty text={withUnit(s.energyKwh100km, "kWh/100\u00a0km", { ...o, fractionDigits: 1 })} /> : null],
+    [specLabel("batteryKwh"), s.batteryKwh !== null ? <Qty text={withUnit(s.batteryKwh, "kWh", { ...o, fractionDigits: oneDecimalIfNeeded(s.batteryKwh) })} /> : null],
+    [specLabel("energyKwh100km"), s.energyKwh100km !== null ? <Qty text={withUnit(s.energyKwh100km, "kWh/100\u00a0km", { ...o, fractionDigits: 1 })} /> : null],
     [
       s.fuelType === "electric" ? "Range per charge" : "Range per tank",
       range ? (
@@ -183,7 +184,7 @@ export function Specifications({ snapshot: s, locale }: { snapshot: PublicSnapsh
       </div>
       {s.features.length ? (
         <div className="fr-features mt-8">
-          <h3 className="text-lg font-bold">Features</h3>
+          <h3 className="text-lg font-bold">{specLabel("features")}</h3>
           <ul className="mt-3 flex flex-wrap gap-2">
             {s.features.map((f) => (
               <li key={f} className="rounded-md border border-line bg-paper-raised px-3 py-1">
