@@ -102,4 +102,3 @@ export function rng(seed: number): () => number {
 export const TYRE = "#1f2124";
 export const TRIM = "#2a2d31";
 export const GLASS = "#2c3a48";
-export const CHROME = "#c9ced3";
