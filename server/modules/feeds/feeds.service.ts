@@ -3,9 +3,10 @@ import { PassThrough, Transform, pipeline, type Readable } from "node:stream";
 import { eq } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
-import { dealerships, feeds, type Dealership, type Feed } from "../../db/schema/index.ts";
+import { feeds, type Dealership, type Feed } from "../../db/schema/index.ts";
 import { notFound, staleVersion } from "../../lib/errors.ts";
 import { actorOf, diffFields, recordAudit } from "../audit/audit.service.ts";
+import { getDealership } from "../dealerships/dealerships.service.ts";
 import {
   DEFAULT_STATUSES, FORMATS_WITH_COLUMNS, effectiveColumns, type CreateFeedInput, type FeedColumn, type FeedFormat, type PreviewFeedInput, type UpdateFeedInput,
 } from "../../../shared/schemas/feeds.ts";
@@ -113,12 +114,6 @@ export interface FeedSpec {
   updatedAt: Date;
 }
 
-async function dealershipOf(ctx: AppContext, id: number): Promise<Dealership> {
-  const [d] = await ctx.database.db.select().from(dealerships).where(eq(dealerships.id, id)).limit(1);
-  if (!d) throw notFound("The dealership");
-  return d;
-}
-
 /** The feed behind a public URL: unknown, rotated-away, revoked, or the wrong extension all answer the same 404. */
 export async function feedForToken(ctx: AppContext, token: string, ext: string): Promise<Feed> {
   if (!TOKEN_PATTERN.test(token)) throw notFound("That feed");
@@ -193,7 +188,7 @@ export interface FeedStream {
  * client goes away the pipeline is torn down and the connection destroyed rather than returned mid-result.
  */
 export async function openFeedStream(ctx: AppContext, spec: FeedSpec, since?: Date): Promise<FeedStream> {
-  const d = await dealershipOf(ctx, spec.dealershipId);
+  const d = await getDealership(ctx.database.db, spec.dealershipId);
   const cells = cellContext(ctx, spec, d);
   const q = feedSelect(spec.dealershipId, spec.filter, cells.now, since);
   const conn = await takeConnection(ctx.database.pool.pool);
@@ -234,7 +229,7 @@ export async function recordFetch(ctx: AppContext, feedId: number, entry: { ip: 
 
 /** The first rows as a table and as the feed's own text, for a feed not yet saved. */
 export async function preview(ctx: AppContext, actor: User, input: PreviewFeedInput): Promise<FeedPreview> {
-  const d = await dealershipOf(ctx, actor.dealershipId);
+  const d = await getDealership(ctx.database.db, actor.dealershipId);
   const spec: FeedSpec = {
     id: 0, dealershipId: actor.dealershipId, name: input.name || "Preview", format: input.format, filter: normaliseFilter(input.filter),
     columns: columnsFor(input.format, input.columns), units: input.units ?? "market", version: 0, updatedAt: ctx.now(),

@@ -32,6 +32,10 @@ export function presentLead(l: Lead, extra: { vehicle?: LeadVehicle; assigneeNam
 }
 export type LeadView = ReturnType<typeof presentLead>;
 
+/** A lead read with its vehicle and assignee (leads.queries.ts); a vehicle never published is named by its stock number. */
+export const presentLeadRow = (r: { lead: Lead; title: string | null; stockNumber: string; slug: string | null; assigneeName: string | null }, now: Date) =>
+  presentLead(r.lead, { vehicle: { title: r.title ?? r.stockNumber, stockNumber: r.stockNumber, slug: r.slug }, assigneeName: r.assigneeName, now });
+
 /** The state of the mail behind a conversation entry, in the three words the page shows. */
 const mailState = (status: string) => (status === "sent" ? "sent" : status === "failed" ? "failed" : "queued");
 

@@ -10,7 +10,8 @@ import { enqueueMail } from "../mail/outbox.ts";
 import { requireVehicle } from "../vehicles/vehicles.service.ts";
 import { enquiryConfirmation, enquiryToStaff, leadReply, shareMail, type EnquiryMailData } from "../mail/templates.ts";
 import { MIN_FILL_MS, CONTACT_LABELS, LEAD_STATUS_LABELS } from "../../../shared/constants/leads.ts";
-import { presentLead, presentLeadCounts, presentLeadDetail, type LeadCounts, type LeadDetail } from "./leads.presenter.ts";
+import { presentLeadCounts, presentLeadDetail, presentLeadRow, type LeadCounts, type LeadDetail, type presentLead } from "./leads.presenter.ts";
+import { leadsWithVehicle } from "./leads.queries.ts";
 
 // The client still imports this type from here; it lives in leads.presenter.ts.
 export type { presentLead };
@@ -67,35 +68,24 @@ export async function listLeads(ctx: AppContext, actor: User, q: LeadListQuery) 
   if (q.due === "overdue") where.push(lt(leads.followUpOn, today));
   if (q.due === "today") where.push(eq(leads.followUpOn, today));
   const page = q.page ?? 1;
-  const rows = await db
-    .select({ lead: leads, title: revisions.title, stockNumber: vehicles.stockNumber, slug: vehicles.publicSlug, assigneeName: users.name })
-    .from(leads)
-    .innerJoin(vehicles, eq(vehicles.id, leads.vehicleId))
-    .leftJoin(revisions, eq(revisions.id, vehicles.currentRevisionId))
-    .leftJoin(users, eq(users.id, leads.assigneeId))
+  const rows = await leadsWithVehicle(db)
     .where(and(...where))
     .orderBy(sql`field(${leads.status}, 'waiting', 'talking', 'test_drive', 'offer', 'won', 'lost')`, desc(leads.createdAt))
     .limit(50)
     .offset((page - 1) * 50);
   const now = ctx.now();
-  return rows.map((r) => presentLead(r.lead, { vehicle: { title: r.title ?? `${r.stockNumber}`, stockNumber: r.stockNumber, slug: r.slug }, assigneeName: r.assigneeName, now }));
+  return rows.map((r) => presentLeadRow(r, now));
 }
 
 export async function getLead(ctx: AppContext, actor: User, id: number): Promise<LeadDetail> {
   const { db } = ctx.database;
-  const [r] = await db
-    .select({ lead: leads, title: revisions.title, stockNumber: vehicles.stockNumber, slug: vehicles.publicSlug, assigneeName: users.name })
-    .from(leads)
-    .innerJoin(vehicles, eq(vehicles.id, leads.vehicleId))
-    .leftJoin(revisions, eq(revisions.id, vehicles.currentRevisionId))
-    .leftJoin(users, eq(users.id, leads.assigneeId))
+  const [r] = await leadsWithVehicle(db)
     .where(and(eq(leads.dealershipId, actor.dealershipId), eq(leads.id, id)));
   if (!r) throw notFound("That lead");
   const notes = await db.select().from(leadNotes).where(eq(leadNotes.leadId, id)).orderBy(asc(leadNotes.at), asc(leadNotes.id));
   const mailIds = notes.map((n) => n.outboxId).filter((x): x is number => x != null);
   const mails = mailIds.length ? await db.select({ id: outbox.id, status: outbox.status, sentAt: outbox.sentAt }).from(outbox).where(inArray(outbox.id, mailIds)) : [];
-  const lead = presentLead(r.lead, { vehicle: { title: r.title ?? r.stockNumber, stockNumber: r.stockNumber, slug: r.slug }, assigneeName: r.assigneeName, now: ctx.now() });
-  return presentLeadDetail(lead, notes, mails);
+  return presentLeadDetail(presentLeadRow(r, ctx.now()), notes, mails);
 }
 
 export async function updateLead(ctx: AppContext, actor: User, id: number, input: UpdateLeadInput) {

@@ -71,17 +71,10 @@ export async function list(ctx: AppContext, actor: User, query: VehicleListQuery
 }
 
 /**
- * The record with its derived figures, recomputed on read as well: "overdue" depends on today, not on the day of the
- * last save. The detail page's evidence, readiness and revisions are added by the publishing module, which depends
- * on this one (publishing.service.ts vehicleDetail), so this module never calls back up.
+ * The staff view of a vehicle row with its derived figures as of the dealership's today: recomputed on every read,
+ * since "overdue" depends on today, not on the day of the last save. The detail read (record, evidence, readiness,
+ * revisions) is composed by the publishing module, which depends on this one: publishing.service.ts vehicleDetail.
  */
-export async function get(ctx: AppContext, actor: User, id: number) {
-  const { db } = ctx.database;
-  const v = await requireVehicle(db, actor.dealershipId, id);
-  return recordView(ctx, v, await getDealership(db, actor.dealershipId));
-}
-
-/** The staff view of a vehicle row with its derived figures as of the dealership's today. */
 export const recordView = (ctx: AppContext, v: Vehicle, d: Dealership) => presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now());
 
 export async function history(ctx: AppContext, actor: User, id: number) {
