@@ -90,10 +90,10 @@ async function countRows(dumpFile: string): Promise<Record<string, number>> {
   const lines = createInterface({ input: createReadStream(dumpFile), crlfDelay: Infinity });
   for await (const line of lines) {
     let m = /^CREATE TABLE `((?:[^`]|``)+)`/.exec(line);
-    if (m) tables[m[1]!.replace(/``/g, "`")] = 0;
+    if (m) tables[m[1].replace(/``/g, "`")] = 0;
     m = /^INSERT INTO `((?:[^`]|``)+)` VALUES /.exec(line);
     if (m) {
-      const name = m[1]!.replace(/``/g, "`");
+      const name = m[1].replace(/``/g, "`");
       tables[name] = (tables[name] ?? 0) + 1;
     }
   }

@@ -364,7 +364,7 @@ async function cli() {
     await ensureLocalDatabase();
   }
   const settings = serverSettings();
-  await restore({ archive: positionals[0]!, databaseUrl: settings.DATABASE_URL, uploadsDir: settings.UPLOADS_DIR, force: values.force, log: console.log });
+  await restore({ archive: positionals[0], databaseUrl: settings.DATABASE_URL, uploadsDir: settings.UPLOADS_DIR, force: values.force, log: console.log });
 }
 
 if (process.argv[1] && pathToFileURL(path.resolve(process.argv[1])).href === import.meta.url) {

@@ -37,11 +37,11 @@ async function make(p: Pick) {
   if (!existsSync(source)) throw new Error(`${p.from} is missing: run npx vitest run tests/e2e/journeys.test.ts first`);
   const meta = await sharp(source).metadata();
   const top = p.startPx ?? 0;
-  const height = Math.min(meta.height!, p.topPx ?? meta.height!) - top;
-  const width = Math.min(MAX_WIDTH, meta.width!, p.width ?? MAX_WIDTH);
+  const height = Math.min(meta.height, p.topPx ?? meta.height) - top;
+  const width = Math.min(MAX_WIDTH, meta.width, p.width ?? MAX_WIDTH);
   const target = path.join(TO, p.to);
   // Palette PNG: screenshots are flat colour and text, which a 256-colour palette keeps sharp and small.
-  await sharp(source).extract({ left: 0, top, width: meta.width!, height }).resize({ width }).png({ palette: true, quality: 90, effort: 8 }).toFile(target);
+  await sharp(source).extract({ left: 0, top, width: meta.width, height }).resize({ width }).png({ palette: true, quality: 90, effort: 8 }).toFile(target);
   const bytes = statSync(target).size;
   if (bytes > MAX_BYTES) throw new Error(`${p.to} is ${Math.round(bytes / 1024)} kB, over ${MAX_BYTES / 1024} kB`);
   console.log(`${p.to.padEnd(24)} ${width} px wide  ${Math.round(bytes / 1024)} kB`);

@@ -1,4 +1,4 @@
-// `npm test`: type checks, the client build, then every vitest suite (unit, API, end-to-end), ending with the
+// `npm test`: type checks, lint, the client build, then every vitest suite (unit, API, end-to-end), ending with the
 // plain "N passed, N failed" line that CI reads.
 import { spawnSync } from "node:child_process";
 import { mkdirSync, readFileSync, existsSync, rmSync } from "node:fs";
@@ -7,12 +7,16 @@ const env = { ...process.env, NO_COLOR: "1", FORCE_COLOR: "0" };
 const run = (cmd, args) => spawnSync(cmd, args, { stdio: "inherit", env }).status === 0;
 let passed = 0;
 let failed = 0;
+/** A step that is not a test runner counts as one passed or one failed test. */
+const step = (title, cmd, args) => {
+  console.log(`== ${title}`);
+  if (run(cmd, args)) passed++;
+  else failed++;
+};
 
-console.log("== Type check (tsc --noEmit)");
-run("node_modules/.bin/tsc", ["--noEmit"]) ? passed++ : failed++;
-
-console.log("== Client build (vite build)");
-run("node_modules/.bin/vite", ["build", "--logLevel", "warn"]) ? passed++ : failed++;
+step("Type check (tsc --noEmit)", "node_modules/.bin/tsc", ["--noEmit"]);
+step("Lint (eslint)", "npm", ["run", "--silent", "lint"]);
+step("Client build (vite build)", "node_modules/.bin/vite", ["build", "--logLevel", "warn"]);
 
 mkdirSync("test-results", { recursive: true });
 const report = "test-results/vitest.json";

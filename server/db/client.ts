@@ -23,7 +23,9 @@ export function connect(url: string, options: { connectionLimit?: number } = {})
     decimalNumbers: true,
   });
   pool.on("connection", (conn) => {
-    conn.query("SET time_zone = '+00:00'");
+    // The event hands over mysql2's callback connection (the promise typings say otherwise), so there is no promise
+    // to await: the statement is queued ahead of every query the pool sends on this connection.
+    void conn.query("SET time_zone = '+00:00'");
   });
   const db = drizzle(pool, { schema, mode: "default", casing: "snake_case" });
   return { db, pool, close: () => pool.end() };

@@ -71,7 +71,14 @@ export async function createContext(options: BootOptions = {}): Promise<AppConte
       database,
       config.demoMail
         ? { host: "127.0.0.1", port: config.FAKE_SMTP_PORT, secure: false, from: config.MAIL_FROM }
-        : { host: config.SMTP_HOST!, port: config.SMTP_PORT, secure: config.SMTP_SECURE, user: config.SMTP_USER, pass: config.SMTP_PASS, from: config.MAIL_FROM },
+        : {
+            host: config.SMTP_HOST!,
+            port: config.SMTP_PORT,
+            secure: config.SMTP_SECURE,
+            user: config.SMTP_USER,
+            pass: config.SMTP_PASS,
+            from: config.MAIL_FROM,
+          },
       logger,
       options.now,
     ),

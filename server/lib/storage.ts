@@ -76,7 +76,7 @@ export function localStorage(root: string): Storage {
     },
     async *list() {
       for (const top of ["photos", "closeups"]) {
-        let shards: string[] = [];
+        let shards: string[];
         try {
           shards = await readdir(path.join(dir, top));
         } catch {

@@ -164,7 +164,7 @@ export function parseTyreSize(input: string | null | undefined): TyreSizeResult 
       prefix: (prefix as TyrePrefix | undefined) ?? null,
       widthMm,
       aspectRatio,
-      construction: CONSTRUCTION[construction!]!,
+      construction: CONSTRUCTION[construction],
       rimInches,
       loadIndex,
       loadIndexDual,

@@ -11,9 +11,9 @@ export const KM_PER_MILE = 1.609344;
 /** Avoirdupois pound, 1959 agreement (TRADE.md §3, S2 [S19a]). */
 export const KG_PER_POUND = 0.45359237;
 /** 0.45359237 kg × 9.80665 m/s² × 0.3048 m (TRADE.md §3, computed). */
-export const NEWTON_METRES_PER_LBF_FT = 1.3558179483314004;
+export const NEWTON_METRES_PER_LBF_FT = 1.3558179483314003;
 /** 550 ft·lbf/s (TRADE.md §3, S [S30]). */
-export const WATTS_PER_MECHANICAL_HP = 745.69987158227022;
+export const WATTS_PER_MECHANICAL_HP = 745.6998715822702;
 /** 75 kgf·m/s (TRADE.md §3, S [S23]). */
 export const WATTS_PER_PS = 735.49875;
 export const MM_PER_INCH = 25.4;

@@ -32,7 +32,7 @@ export type ModelYearResult =
 export function modelYearFromVin(vin: unknown, options: { today?: string } = {}): ModelYearResult | null {
   const normalised = normaliseVin(vin);
   if (normalised === null || normalised.length !== VIN_LENGTH) return null;
-  const code = normalised[9]!;
+  const code = normalised[9];
   const first = MODEL_YEAR_CODES[code];
   if (first === undefined) {
     return {
@@ -47,10 +47,10 @@ export function modelYearFromVin(vin: unknown, options: { today?: string } = {})
   const today = parseIsoDate(options.today);
   const latest = today ? today.year + 1 : Infinity;
   const candidates = [first, first + 30].filter((year) => year <= latest);
-  const position7 = normalised[6]!;
+  const position7 = normalised[6];
   const ruleYear = /[A-Z]/.test(position7) ? first + 30 : /[0-9]/.test(position7) ? first : null;
   if (candidates.length === 1) {
-    return { status: "decoded", code, candidates, year: candidates[0]!, ambiguous: false, basis: "only_candidate" };
+    return { status: "decoded", code, candidates, year: candidates[0], ambiguous: false, basis: "only_candidate" };
   }
   if (ruleYear === null || !candidates.includes(ruleYear)) {
     return { status: "decoded", code, candidates, year: null, ambiguous: candidates.length > 1, basis: "undecided" };

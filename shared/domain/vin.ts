@@ -86,9 +86,9 @@ export function vinWeightedSum(vin: string): number | null {
   let sum = 0;
   for (let i = 0; i < VIN_LENGTH; i++) {
     if (i === CHECK_DIGIT_POSITION - 1) continue;
-    const value = TRANSLITERATION[vin[i]!];
+    const value = TRANSLITERATION[vin[i]];
     if (value === undefined) return null;
-    sum += value * WEIGHTS[i]!;
+    sum += value * WEIGHTS[i];
   }
   return sum;
 }

@@ -55,7 +55,7 @@ async function checksums(database: string): Promise<Record<string, string>> {
   const out: Record<string, string> = {};
   for (const { name } of tables) {
     const [r] = await rows<{ Checksum: string | number | null }>(`CHECKSUM TABLE \`${database}\`.\`${name}\``);
-    out[name] = String(r!.Checksum);
+    out[name] = String(r.Checksum);
   }
   return out;
 }
@@ -95,7 +95,7 @@ describe("backup and restore", () => {
     // The worker bumps a photo's version when it stores the sizes, so a deletion asks for the current one.
     const deletePhoto = async (vehicleId: number, photoId: number) => {
       const [p] = await rows<{ version: number }>("SELECT version FROM photos WHERE id = ?", [photoId]);
-      return workshop.delete(`/api/vehicles/${vehicleId}/photos/${photoId}?version=${p!.version}`);
+      return workshop.delete(`/api/vehicles/${vehicleId}/photos/${photoId}?version=${p.version}`);
     };
 
     // The writer: create a vehicle, upload a photo, edit, delete the previous photo and clean up orphans, again and again.
@@ -183,13 +183,13 @@ describe("backup and restore", () => {
     // The doomed photo was deleted after the snapshot: its row is in the backup, and so are all its files.
     const [photo] = await rows<{ masterKey: string; variants: unknown }>(`SELECT master_key AS masterKey, variants FROM \`${target}\`.photos WHERE id = ?`, [doomedPhoto.id]);
     expect(photo).toBeDefined();
-    const variants = (typeof photo!.variants === "string" ? JSON.parse(photo!.variants) : photo!.variants) as Array<{ key: string }>;
+    const variants = (typeof photo.variants === "string" ? JSON.parse(photo.variants) : photo.variants) as Array<{ key: string }>;
     expect(variants.length).toBeGreaterThan(0);
     // Rows the writer did not touch are there as they were.
     for (const table of ["revisions", "revision_media", "leads", "users", "defects"]) {
       const [src] = await rows<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${table}\``);
       const [dst] = await rows<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${target}\`.\`${table}\``);
-      expect(Number(dst!.n), table).toBe(Number(src!.n));
+      expect(Number(dst.n), table).toBe(Number(src.n));
     }
 
     // Every file a restored row names is restored, with the content the backup recorded; masters and close-ups are
@@ -199,7 +199,7 @@ describe("backup and restore", () => {
     const database = connect(firstTarget.db.url, { connectionLimit: 2 });
     try {
       const keys = await referencedKeys(database);
-      expect(keys.has(photo!.masterKey)).toBe(true);
+      expect(keys.has(photo.masterKey)).toBe(true);
       for (const v of variants) expect(keys.has(v.key)).toBe(true);
       for (const key of keys) {
         expect(files.get(key), key).toBe(recorded.get(key));
@@ -273,7 +273,7 @@ describe("backup and restore", () => {
     }
     expect(readFileSync(path.join(stray.uploadsDir, "invoices", "march.pdf"), "utf8")).toBe("not ours");
     const [tables] = await rows<{ n: number }>("SELECT COUNT(*) AS n FROM information_schema.TABLES WHERE TABLE_SCHEMA = ?", [stray.db.name]);
-    expect(Number(tables!.n)).toBe(0);
+    expect(Number(tables.n)).toBe(0);
   }, 300_000);
 
   it("when something holds the target's files lock (a clean-up pass or a backup of it), then restore waits for it, and gives up without changing anything", async () => {
@@ -325,7 +325,7 @@ describe("backup and restore", () => {
     writeFileSync(truncated, whole.subarray(0, Math.floor(whole.length / 2)));
     const flipped = path.join(work, "flipped.tar.gz");
     const damaged = Buffer.from(whole);
-    damaged[Math.floor(damaged.length * 0.6)]! ^= 0xff;
+    damaged[Math.floor(damaged.length * 0.6)] ^= 0xff;
     writeFileSync(flipped, damaged);
     const notOurs = path.join(work, "not-a-backup.tar.gz");
     writeFileSync(notOurs, "this is not an archive at all\n");
@@ -334,7 +334,7 @@ describe("backup and restore", () => {
     const unpacked = path.join(work, "unpacked");
     mkdirSync(unpacked);
     await tar.extract({ file: consistentArchive, cwd: unpacked });
-    const victim = (JSON.parse(readFileSync(path.join(unpacked, "manifest.json"), "utf8")) as { files: Array<{ key: string }> }).files[0]!.key;
+    const victim = (JSON.parse(readFileSync(path.join(unpacked, "manifest.json"), "utf8")) as { files: Array<{ key: string }> }).files[0].key;
     writeFileSync(path.join(unpacked, "uploads", victim), "not the photo");
     const tampered = path.join(work, "tampered.tar.gz");
     await tar.create({ gzip: true, file: tampered, cwd: unpacked }, ["manifest.json", "database.sql", "uploads"]);
@@ -358,7 +358,7 @@ describe("backup and restore", () => {
     expect(cli?.code).toBe(1);
     expect(cli?.stderr).toMatch(/Restore stopped: The archive .*truncated\.tar\.gz is corrupt or truncated/);
     const [tables] = await rows<{ n: number }>("SELECT COUNT(*) AS n FROM information_schema.TABLES WHERE TABLE_SCHEMA = ?", [target.db.name]);
-    expect(Number(tables!.n)).toBe(0);
+    expect(Number(tables.n)).toBe(0);
     expect(() => readdirSync(target.uploadsDir)).toThrow();
   }, 300_000);
 });

@@ -60,7 +60,7 @@ describe("who may manage feeds", () => {
     const sales = await signIn("sales");
     const workshop = await signIn("workshop");
     for (const [method, path, body] of routes) {
-      const send = (a: ReturnType<typeof agent>) => (a as unknown as Record<string, (p: string) => request.Test>)[method]!(path).send(body ?? {});
+      const send = (a: ReturnType<typeof agent>) => (a as unknown as Record<string, (p: string) => request.Test>)[method](path).send(body ?? {});
       expect((await send(agent())).status, `${method} ${path} signed out`).toBe(401);
       expect((await send(sales)).status, `${method} ${path} as sales`).toBe(403);
       expect((await send(workshop)).status, `${method} ${path} as workshop`).toBe(403);
@@ -72,13 +72,13 @@ describe("who may manage feeds", () => {
 describe("creating a feed", () => {
   it("when marketing creates a feed without columns, then it has the default set and a long secret URL shown this once, stored only as its SHA-256", async () => {
     const { m, feed, url } = await createFeed({ name: "Portal A", format: "csv" });
-    const token = /\/feeds\/([A-Za-z0-9_-]+)\.csv$/.exec(url)![1]!;
+    const token = /\/feeds\/([A-Za-z0-9_-]+)\.csv$/.exec(url)![1];
     expect(token.length).toBeGreaterThanOrEqual(43); // 256 bits, base64url
     expect(url.startsWith(`${ORIGIN}/feeds/`)).toBe(true);
     expect(feed.defaultColumns).toBe(true);
     expect(feed.columns.map((c: { key: string }) => c.key)).toEqual(expect.arrayContaining(["stockNumber", "make", "model", "price", "url", "photoUrls"]));
     const [row] = await t.ctx.database.db.select().from(feeds).where(eq(feeds.id, feed.id));
-    expect(row!.tokenHash).toBe(createHash("sha256").update(token).digest("hex"));
+    expect(row.tokenHash).toBe(createHash("sha256").update(token).digest("hex"));
     expect(JSON.stringify(row)).not.toContain(token);
     const listed = (await m.get("/api/feeds")).body.feeds.find((f: { id: number }) => f.id === feed.id);
     expect(JSON.stringify(listed)).not.toContain(token);
@@ -146,8 +146,8 @@ describe("the formats, parsed back with independent parsers", () => {
     expect(res.headers["content-type"]).toMatch(/^text\/csv; charset=utf-8/);
     const text = (res.body as Buffer).toString("utf8");
     expect(text.includes("\r\n")).toBe(true); // RFC 4180 line ends
-    const records = parseCsv(text, { columns: true, bom: true }) as Array<Record<string, string>>;
-    expect(Object.keys(records[0]!)).toEqual(CSV_COLUMNS.map((c) => c.header));
+    const records = parseCsv<Record<string, string>>(text, { columns: true, bom: true });
+    expect(Object.keys(records[0])).toEqual(CSV_COLUMNS.map((c) => c.header));
     const mine = records.find((r) => r["Stock no."] === tricky.stockNumber)!;
     const s = tricky.snapshot;
     expect(mine["Model, as sold"]).toBe(TRICKY_MODEL);
@@ -161,7 +161,7 @@ describe("the formats, parsed back with independent parsers", () => {
     expect(mine.Defects).toBe(String(s.defects.length));
     expect(mine.Page).toBe(tricky.url);
     expect(mine.status).toBe("live");
-    const photos = mine["Photos 640"]!.split("|");
+    const photos = mine["Photos 640"].split("|");
     expect(photos).toHaveLength(s.photos.length);
     for (const p of photos) expect(p).toMatch(new RegExp(`^${ORIGIN}/media/.+-640\\.jpg$`));
     expect(records.find((r) => r["Stock no."] === plain.stockNumber)).toBeTruthy();
@@ -254,8 +254,8 @@ describe("incremental sync and validators", () => {
   it("when nothing changed, then If-None-Match and If-Modified-Since both get 304; after a publish the ETag changes", async () => {
     const { path } = await createFeed({ name: "Etag", format: "csv" });
     const first = await request(app).get(path);
-    const etag = first.headers.etag!;
-    const lastModified = first.headers["last-modified"]!;
+    const etag = first.headers.etag;
+    const lastModified = first.headers["last-modified"];
     expect(etag).toMatch(/^W\/"/);
     expect(new Date(lastModified).getTime()).toBeGreaterThan(0);
     const again = await request(app).get(path).set("If-None-Match", etag);
@@ -294,9 +294,9 @@ describe("incremental sync and validators", () => {
     expect(gone).toEqual({ stockNumber: plain.stockNumber, url: plain.url, removed: true, removedAt: expect.any(String) });
     expect(Date.parse(gone.removedAt)).toBeGreaterThan(Date.parse(mark));
 
-    const csv = parseCsv((await request(app).get(`${csvPath}?since=${encodeURIComponent(mark)}`)).text, { columns: true }) as Array<Record<string, string>>;
+    const csv = parseCsv<Record<string, string>>((await request(app).get(`${csvPath}?since=${encodeURIComponent(mark)}`)).text, { columns: true });
     // With since, the stock number, status and URL are added when the feed lacks them.
-    expect(Object.keys(csv[0]!)).toEqual(["Model", "stockNumber", "status", "url"]);
+    expect(Object.keys(csv[0])).toEqual(["Model", "stockNumber", "status", "url"]);
     expect(csv.find((r) => r.stockNumber === plain.stockNumber)).toEqual({ Model: "", stockNumber: plain.stockNumber, status: "removed", url: plain.url });
     expect(csv.find((r) => r.stockNumber === freshStock)).toMatchObject({ Model: "Quarrel", status: "live" });
 

@@ -114,7 +114,7 @@ function shaped(js: JsonSchema, depth = 0): fc.Arbitrary<unknown> {
   if (js.enum) return leaf(fc.constantFrom(...js.enum));
   const alternatives = js.anyOf ?? js.oneOf;
   if (alternatives?.length) return fc.oneof(...alternatives.map((a) => shaped(a, depth + 1)));
-  if (js.allOf?.length) return shaped(js.allOf[0]!, depth + 1);
+  if (js.allOf?.length) return shaped(js.allOf[0], depth + 1);
   const type = Array.isArray(js.type) ? js.type[0] : js.type;
   switch (type) {
     case "object": {
@@ -130,7 +130,7 @@ function shaped(js: JsonSchema, depth = 0): fc.Arbitrary<unknown> {
           fc.nat(9),
         )
         .map(([value, drop, extra, dice]) => {
-          const out: Json = { ...(value as Json) };
+          const out: Json = { ...(value) };
           if (dice === 0) for (const k of drop) delete out[k];
           if (extra) Object.defineProperty(out, extra[0], { value: extra[1], enumerable: true, writable: true, configurable: true });
           return out;
@@ -220,7 +220,7 @@ function accepted(js: JsonSchema, depth = 0, name = ""): fc.Arbitrary<unknown> {
   if (js.enum) return fc.constantFrom(...js.enum);
   const alternatives = js.anyOf ?? js.oneOf;
   if (alternatives?.length) return fc.oneof(...alternatives.map((a) => accepted(a, depth + 1)));
-  if (js.allOf?.length) return accepted(js.allOf[0]!, depth + 1);
+  if (js.allOf?.length) return accepted(js.allOf[0], depth + 1);
   const type = Array.isArray(js.type) ? js.type[0] : js.type;
   switch (type) {
     case "object": {
@@ -310,7 +310,7 @@ function requestsFor(r: RouteEntry, admitted: Caller): fc.Arbitrary<FuzzRequest>
     fc.oneof(
       { weight: 3, arbitrary: fc.constant(ABSENT[name] ?? "999999") },
       { weight: 3, arbitrary: fc.constantFrom(...BAD_PARAMS) },
-      { weight: 2, arbitrary: paramsSchema?.properties?.[name] ? shaped(paramsSchema.properties[name]!).map((v) => enc(typeof v === "string" ? v : JSON.stringify(v) ?? "")) : fc.constant("1") },
+      { weight: 2, arbitrary: paramsSchema?.properties?.[name] ? shaped(paramsSchema.properties[name]).map((v) => enc(typeof v === "string" ? v : JSON.stringify(v) ?? "")) : fc.constant("1") },
     );
   const params = r.params.length
     ? fc.oneof(
@@ -318,7 +318,7 @@ function requestsFor(r: RouteEntry, admitted: Caller): fc.Arbitrary<FuzzRequest>
         { weight: 3, arbitrary: fc.record(Object.fromEntries(r.params.map((p) => [p, paramValue(p)]))).map((p) => ({ p, kind: "bad" as const })) },
         { weight: 2, arbitrary: fc.constant({ p: Object.fromEntries(r.params.map((p) => [p, realFor(p) ?? ABSENT[p] ?? "1"])), kind: "real" as const }) },
       )
-    : fc.constant({ p: {} as Record<string, string>, kind: "absent" as const });
+    : fc.constant({ p: {}, kind: "absent" as const });
   const query = fc.oneof(
     { weight: 3, arbitrary: querySchema ? shaped(querySchema).map(encodeQuery) : fc.constant("") },
     { weight: 1, arbitrary: fc.dictionary(fc.constantFrom("page", "pageSize", "q", "sort", "status", "since", "version", "__proto__", "x[y]"), nastyString.map((s) => s.slice(0, 2000)), { maxKeys: 3 }).map(encodeQuery) },
@@ -336,7 +336,7 @@ function requestsFor(r: RouteEntry, admitted: Caller): fc.Arbitrary<FuzzRequest>
   const callers: Caller[] = r.key === "POST /api/auth/sign-out" ? ["public"] : admitted === "public" ? ["public", "admin"] : [admitted, admitted, admitted, "public"];
   return fc
     .record({ caller: fc.constantFrom(...callers), params, query, body })
-    .map(({ caller, params: { p, kind }, query: q, body: b }) => ({ caller, params: p, paramsKind: kind, query: q, body: b }) as FuzzRequest)
+    .map(({ caller, params: { p, kind }, query: q, body: b }) => ({ caller, params: p, paramsKind: kind, query: q, body: b }))
     .filter((req) => !mayChange(r, req));
 }
 
@@ -383,7 +383,7 @@ function bodyValue(req: FuzzRequest): unknown {
 async function send(r: RouteEntry, req: FuzzRequest): Promise<request.Response> {
   const url = samplePath(r.path, req.params) + (req.query ? `?${req.query}` : "");
   const agent = agents.get(req.caller)!;
-  let test = (agent as unknown as Record<string, (u: string) => request.Test>)[r.method.toLowerCase()]!(url);
+  let test = (agent as unknown as Record<string, (u: string) => request.Test>)[r.method.toLowerCase()](url);
   if (req.body.kind === "json") test = test.set("Content-Type", "application/json").send(JSON.stringify(req.body.value) ?? "null");
   else if (req.body.kind === "raw") {
     test = test.set("Content-Type", req.body.contentType);
@@ -462,7 +462,7 @@ describe("fuzzing every route", () => {
     if (process.env.FUZZ_TRACE) appendFileSync(process.env.FUZZ_TRACE, ["spare user:", JSON.stringify(spare)].join(" ") + "\n");
     const defect = (await admin.post(`/api/vehicles/${real.id}/defects`).send({ zone: "front", kind: "scratch", severity: "minor", repairPlan: "disclosed_as_is" })).body.defect;
     const values = (r: RouteEntry): Record<string, string> => ({
-      ...ABSENT, defectId: String(defect.id), id: r.path.startsWith("/api/feeds/") ? real.feedId! : r.path.startsWith("/api/users/") ? spare.id : real.id!,
+      ...ABSENT, defectId: String(defect.id), id: r.path.startsWith("/api/feeds/") ? real.feedId : r.path.startsWith("/api/users/") ? spare.id : real.id,
     });
     // Valid bodies to start from where cross-field rules make a random draw unlikely to pass (make with model, VIN
     // check digit, odometer pairs, four tyres, columns for the format): a subset of fields is replaced by edge values.

@@ -26,7 +26,7 @@ const filesUnder = (dir: string): string[] =>
 
 async function countPhotos(vehicleId: number) {
   const [rows] = await t.ctx.database.pool.query("select count(*) as n from photos where vehicle_id = ?", [vehicleId]);
-  return Number((rows as Array<{ n: number }>)[0]!.n);
+  return Number((rows as Array<{ n: number }>)[0].n);
 }
 
 describe("POST /api/vehicles/:id/photos", () => {
@@ -58,11 +58,11 @@ describe("POST /api/vehicles/:id/photos", () => {
       const meta = await sharp(img.body as Buffer).metadata();
       expect(meta.exif).toBeUndefined();
       expect(meta.orientation ?? 1).toBe(1);
-      expect(meta.height!).toBeGreaterThan(meta.width!);
+      expect(meta.height).toBeGreaterThan(meta.width);
       // Upright: the red half (left when stored) is now on top.
       const { data } = await sharp(img.body as Buffer).resize(4, 4, { fit: "fill" }).raw().toBuffer({ resolveWithObject: true });
-      expect(data[0]!).toBeGreaterThan(data[2]!);
-      expect(data[data.length - 1]!).toBeGreaterThan(data[data.length - 3]!);
+      expect(data[0]).toBeGreaterThan(data[2]);
+      expect(data[data.length - 1]).toBeGreaterThan(data[data.length - 3]);
     }
   });
 

@@ -168,7 +168,7 @@ describe("what search engines and link previews read", () => {
     expect(html).toContain(`<link rel="canonical" href="${url}" />`);
     expect(html).toMatch(/<meta property="og:image" content="http:\/\/127\.0\.0\.1:3000\/media\/photos\/[a-f0-9]{2}\/[a-f0-9]{64}-(1024|800)\.jpg" \/>/);
     expect(html).toMatch(/<meta name="twitter:card" content="summary_large_image" \/>/);
-    const json = JSON.parse(html.match(/<script type="application\/ld\+json">([\s\S]*?)<\/script>/)![1]!);
+    const json = JSON.parse(html.match(/<script type="application\/ld\+json">([\s\S]*?)<\/script>/)![1]);
     // ../shared/TRADE.md §7 (schema.org [S23]): Car → Offer; UN/CEFACT codes KMT, LTR, KWT, CMQ, NU; L/100 km as unitText.
     expect(json["@context"]).toBe("https://schema.org");
     expect(json["@type"]).toBe("Car");

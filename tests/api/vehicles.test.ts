@@ -11,7 +11,7 @@ afterAll(() => t.close());
 
 const count = async () => {
   const [rows] = await t.ctx.database.pool.query("select count(*) as n from vehicles");
-  return Number((rows as Array<{ n: number }>)[0]!.n);
+  return Number((rows as Array<{ n: number }>)[0].n);
 };
 
 async function createAsSales(over: Record<string, unknown> = {}) {

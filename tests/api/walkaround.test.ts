@@ -38,7 +38,7 @@ describe("defects", () => {
     expect(meta.width).toBe(meta.height);
     // The pin sits in the red (left) half of the test photo, so the close-up is red.
     const { data } = await sharp(img.body as Buffer).resize(1, 1).raw().toBuffer({ resolveWithObject: true });
-    expect(data[0]!).toBeGreaterThan(data[2]!);
+    expect(data[0]).toBeGreaterThan(data[2]);
     const second = await w.post(`/api/vehicles/${v.id}/defects`).send(defect({ kind: "dent", severity: "moderate" }));
     expect(second.body.defect.number).toBe(2);
   });

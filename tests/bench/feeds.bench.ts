@@ -65,9 +65,9 @@ function snapshotFor(i: number, make: string, d: { name: string; currency: strin
   };
   const km = 20_000 + ((i * 7919) % 180_000);
   return {
-    title: `${2012 + (i % 12)} ${make} ${MODELS[i % MODELS.length]}`, stockNumber: String(20_000 + i), make, model: MODELS[i % MODELS.length]!, variant: i % 5 ? `Trek ${1 + (i % 3)}.${i % 10}` : null,
-    buildYear: 2012 + (i % 12), firstRegistrationDate: null, vin: null, bodyType: ["suv", "hatchback", "sedan", "ute"][i % 4]!, colour: "Slate grey", doors: 5, seats: 5, driveType: "fwd",
-    fuelType: ["petrol", "diesel", "hybrid"][i % 3]!, engineCapacityCc: 1998, cylinders: 4, aspiration: "turbo", powerKw: 110 + (i % 60), torqueNm: 300, transmission: "automatic", gears: 8,
+    title: `${2012 + (i % 12)} ${make} ${MODELS[i % MODELS.length]}`, stockNumber: String(20_000 + i), make, model: MODELS[i % MODELS.length], variant: i % 5 ? `Trek ${1 + (i % 3)}.${i % 10}` : null,
+    buildYear: 2012 + (i % 12), firstRegistrationDate: null, vin: null, bodyType: ["suv", "hatchback", "sedan", "ute"][i % 4], colour: "Slate grey", doors: 5, seats: 5, driveType: "fwd",
+    fuelType: ["petrol", "diesel", "hybrid"][i % 3], engineCapacityCc: 1998, cylinders: 4, aspiration: "turbo", powerKw: 110 + (i % 60), torqueNm: 300, transmission: "automatic", gears: 8,
     kerbWeightKg: 1500, fuelTankLitres: 60, fuelConsumptionL100km: 6.5, consumptionTestCycle: "wltp", batteryKwh: null, energyKwh100km: null, odometer: { reading: km, unit: "km", km },
     keysCount: 2, previousOwners: 1, features: ["Tow bar", "Reversing camera", "Heated seats"],
     descriptionHtml: `<p>${"Inspected on our yard before sale; independent inspections welcome. Serviced on time, with the book. ".repeat(5)}</p>`,
@@ -92,11 +92,11 @@ async function seedStock(ctx: Awaited<ReturnType<typeof createContext>>, env: Be
     const rows = Array.from({ length: Math.min(500, TOTAL - from) }, (_, k) => {
       const i = from + k;
       // Exactly SMALL vehicles are Vorsels: the 1,000-row feed is the same query with a make filter.
-      const make = i % (TOTAL / SMALL) === 0 ? "Vorsel" : MAKES[i % MAKES.length]!;
-      return { i, make, snapshot: snapshotFor(i, make, d!) };
+      const make = i % (TOTAL / SMALL) === 0 ? "Vorsel" : MAKES[i % MAKES.length];
+      return { i, make, snapshot: snapshotFor(i, make, d) };
     });
     await db.insert(vehicles).values(rows.map(({ i, make, snapshot }) => ({
-      dealershipId: d!.id, stockNumber: snapshot.stockNumber, status: "live" as const, make, model: snapshot.model, features: [], serviceHistory: [], derived: snapshot.derived,
+      dealershipId: d.id, stockNumber: snapshot.stockNumber, status: "live" as const, make, model: snapshot.model, features: [], serviceHistory: [], derived: snapshot.derived,
       stockedAt: new Date(now - (i % 120) * DAY_MS), publicSlug: `bench-${i}`, lastRevisionNumber: 1,
     })));
     const ids = await db.select({ id: vehicles.id, stockNumber: vehicles.stockNumber }).from(vehicles).where(sql`${vehicles.publicSlug} like 'bench-%' and ${vehicles.currentRevisionId} is null`);
@@ -109,7 +109,7 @@ async function seedStock(ctx: Awaited<ReturnType<typeof createContext>>, env: Be
   }
   await db.execute(sql.raw("ANALYZE TABLE vehicles, revisions"));
   env.log(`inserted ${TOTAL} published vehicles in ${((performance.now() - started) / 1000).toFixed(1)} s`);
-  return d!;
+  return d;
 }
 
 // The bench's columns: the record, the condition figures and the page URL, all read from the snapshot.
@@ -133,7 +133,7 @@ function startChild(databaseUrl: string): Promise<{ child: ChildProcess; port: n
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, ["--import", "tsx", SELF], { env: { ...process.env, FEEDS_BENCH_CHILD: "1", DATABASE_URL: databaseUrl }, stdio: ["ignore", "pipe", "inherit"] });
     let out = "";
-    child.stdout!.on("data", (c: Buffer) => {
+    child.stdout.on("data", (c: Buffer) => {
       out += c.toString();
       const m = /LISTENING (\d+)/.exec(out);
       if (m) resolve({ child, port: Number(m[1]) });
@@ -216,7 +216,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
       }
     }
     const med = (xs: number[]) => percentile(xs, 50);
-    env.log(`app CSV ${big[0]!.bytes} bytes for ${TOTAL} rows; mariadb client ${base[0]!.bytes} bytes (tab-separated, unquoted)`);
+    env.log(`app CSV ${big[0].bytes} bytes for ${TOTAL} rows; mariadb client ${base[0].bytes} bytes (tab-separated, unquoted)`);
     env.log(`peak RSS of the app process: ${little.map((x) => x.rssMb.toFixed(0)).join(", ")} MB at ${SMALL}; ${big.map((x) => x.rssMb.toFixed(0)).join(", ")} MB at ${TOTAL}`);
     return [
       { figure: `CSV feed, ${TOTAL} vehicles, whole response`, unit: "ms", value: med(big.map((x) => x.totalMs)), baseline: med(base.map((x) => x.ms)), baselineLabel: "mariadb -B to a file", samples: SAMPLES },

@@ -119,8 +119,8 @@ function cannon(url: string, seconds: number, children: Set<ChildProcess>): Prom
     children.add(child);
     let stdout = "";
     let stderr = "";
-    child.stdout!.on("data", (d) => (stdout += d));
-    child.stderr!.on("data", (d) => (stderr += d));
+    child.stdout.on("data", (d) => (stdout += d));
+    child.stderr.on("data", (d) => (stderr += d));
     const timer = setTimeout(() => child.kill("SIGKILL"), (seconds + 60) * 1000);
     child.on("error", (err) => (clearTimeout(timer), children.delete(child), reject(err)));
     child.on("close", (code) => {
@@ -206,7 +206,7 @@ async function startServer(env: BenchEnv, port: number, databaseUrl: string, upl
   });
   children.add(child);
   let stderr = "";
-  child.stderr!.on("data", (d) => (stderr = (stderr + d).slice(-4000)));
+  child.stderr.on("data", (d) => (stderr = (stderr + d).slice(-4000)));
   child.on("exit", () => children.delete(child));
   const t0 = performance.now();
   for (;;) {
@@ -251,7 +251,7 @@ async function signInCookie(base: string, role: Role): Promise<string> {
     body: JSON.stringify({ email, password: PASSWORD }),
   });
   if (res.status !== 200) throw new Error(`sign-in as ${role}: ${res.status} ${await res.text()}`);
-  const cookies = res.headers.getSetCookie().map((c) => c.split(";")[0]!);
+  const cookies = res.headers.getSetCookie().map((c) => c.split(";")[0]);
   if (!cookies.length) throw new Error(`sign-in as ${role} set no cookie`);
   return cookies.join("; ");
 }
@@ -272,7 +272,7 @@ async function setUp(env: BenchEnv, ctx: AppContext, base: string): Promise<{ sl
         if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status}`);
         return a;
       },
-      close: async () => undefined,
+      close: () => Promise.resolve(),
     };
     const { slug } = await publishReadyVehicle(shim);
     const agents: Agent[] = [];
@@ -461,7 +461,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
     env.log(`agents alone, ${WRITERS_ALONE_SECONDS} s (saves only): ${aloneStats.saves.length} saves, p50 ${percentile(aloneStats.saves, 50).toFixed(1)} ms, p99 ${percentile(aloneStats.saves, 99).toFixed(1)} ms; ${statusLine(aloneStats)}`);
 
     const mixedStats = newStats();
-    const apiUrl = targets[1]!.url;
+    const apiUrl = targets[1].url;
     const m = await cpuDuring(pids, () =>
       Promise.all([
         cannon(apiUrl, SECONDS, children),

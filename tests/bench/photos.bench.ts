@@ -86,17 +86,17 @@ export async function photoLikeJpeg(seed = 20_240_611): Promise<Buffer> {
       let dr = 0, dg = 0, db = 0;
       for (const p of rowPanels) {
         if (x >= p.x0 && x < p.x1) {
-          dr += p.shade[0]!;
-          dg += p.shade[1]!;
-          db += p.shade[2]!;
+          dr += p.shade[0];
+          dg += p.shade[1];
+          db += p.shade[2];
         }
       }
       // Mostly luminance structure, as in a photo, with a little chroma from the large blotches.
-      const lum = (big[i]! - 128) * 0.5 + (mid[i]! - 128) * 0.3 + (fine[i]! - 128) * 0.2 + (rng() - 0.5) * 8;
+      const lum = (big[i] - 128) * 0.5 + (mid[i] - 128) * 0.3 + (fine[i] - 128) * 0.2 + (rng() - 0.5) * 8;
       for (let c = 0; c < 3; c++) {
         const delta = c === 0 ? dr : c === 1 ? dg : db;
-        const tint = c === 1 ? 0 : (big[i + c]! - 128) * 0.15 + (mid[i + c]! - 128) * 0.06;
-        const v = base[c]! + lum + tint + delta;
+        const tint = c === 1 ? 0 : (big[i + c] - 128) * 0.15 + (mid[i + c] - 128) * 0.06;
+        const v = base[c] + lum + tint + delta;
         px[i + c] = v < 0 ? 0 : v > 255 ? 255 : v;
       }
     }
@@ -281,7 +281,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
       const res = await fetch(`${base}/api/vehicles/${vehicleId}/photos`, { method: "POST", headers: { Origin: ORIGIN, Cookie: workshop }, body: form });
       const body = (await res.json()) as { photos?: UploadedPhoto[]; refused?: unknown[] };
       if (res.status !== 201 || body.photos?.length !== 1) throw new Error(`upload to vehicle ${vehicleId}: ${res.status} ${JSON.stringify(body)}`);
-      return body.photos[0]!;
+      return body.photos[0];
     };
     const listed = async (vehicleId: number): Promise<UploadedPhoto[]> => {
       const res = await fetch(`${base}/api/vehicles/${vehicleId}/photos`, { headers: { Cookie: workshop } });
@@ -311,7 +311,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
     const hwm = canHwm ? highWater() : undefined;
     for (const [k, id] of memVehicles.entries()) {
       const [p] = await listed(id);
-      if (p?.status !== "ready" || p.id !== memPhotos[k]!.id) throw new Error(`vehicle ${id}'s photo is ${p?.status ?? "missing"} after the worker settled`);
+      if (p?.status !== "ready" || p.id !== memPhotos[k].id) throw new Error(`vehicle ${id}'s photo is ${p?.status ?? "missing"} after the worker settled`);
     }
     env.log(
       `app, ${CONCURRENT} concurrent uploads: all 201 after ${uploadsWall.toFixed(0)} ms, variants done after ${variantsWall.toFixed(0)} ms; ` +
@@ -363,7 +363,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
       `master ${warm.master.width}×${warm.master.height} ${(warm.master.buffer.length / 1024).toFixed(0)} KB; ${warm.variants.length} variants ` +
         `(${[...new Set(warm.variants.map((v) => v.width))].join("/")} px × avif/webp/jpeg), ${(warm.variants.reduce((s, v) => s + v.bytes, 0) / 1024).toFixed(0)} KB in all`,
     );
-    if (memPhotos[0]!.src !== `/media/${expectedMasterKey}`) throw new Error(`the app stored master ${memPhotos[0]!.src}, bare sharp made ${expectedMasterKey}`);
+    if (memPhotos[0].src !== `/media/${expectedMasterKey}`) throw new Error(`the app stored master ${memPhotos[0].src}, bare sharp made ${expectedMasterKey}`);
     await viaApp();
     env.log(`warm-up done; ${SAMPLES} samples each way, app and bare sharp alternating`);
 

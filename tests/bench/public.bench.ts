@@ -101,8 +101,8 @@ function runNode(args: string[], timeoutMs: number, children: Set<ChildProcess>)
     children.add(child);
     let stdout = "";
     let stderr = "";
-    child.stdout!.on("data", (d) => (stdout += d));
-    child.stderr!.on("data", (d) => (stderr += d));
+    child.stdout.on("data", (d) => (stdout += d));
+    child.stderr.on("data", (d) => (stderr += d));
     const timer = setTimeout(() => child.kill("SIGKILL"), timeoutMs);
     child.on("error", (err) => {
       clearTimeout(timer);
@@ -207,7 +207,7 @@ function testAppShim(app: ReturnType<typeof createApp>, ctx: AppContext, base: s
       if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
       return a;
     },
-    close: async () => undefined,
+    close: () => Promise.resolve(),
   };
 }
 
@@ -457,7 +457,7 @@ function short(value: unknown, base: string): string {
 }
 
 function printAudits(env: BenchEnv, lhr: Lhr, base: string) {
-  const perf = lhr.categories.performance!;
+  const perf = lhr.categories.performance;
   env.log(
     `Lighthouse ${lhr.lighthouseVersion}, ${lhr.environment.hostUserAgent.match(/Chrome\/[\d.]+/)?.[0] ?? "?"}, ${lhr.configSettings.formFactor}, throttling ${lhr.configSettings.throttlingMethod} ` +
       `(RTT ${lhr.configSettings.throttling.rttMs} ms, ${lhr.configSettings.throttling.throughputKbps} kbps, CPU ×${lhr.configSettings.throttling.cpuSlowdownMultiplier}); ` +
@@ -507,7 +507,7 @@ async function lighthouseFigures(env: BenchEnv, url: string, base: string, child
   const { engines } = JSON.parse(readFileSync(lhPkg, "utf8")) as { engines?: { node?: string } };
   const needs = engines?.node?.match(/>=\s*(\d+)/)?.[1];
   if (needs && Number(process.versions.node.split(".")[0]) < Number(needs)) {
-    env.log(`Lighthouse needs Node ${engines!.node}, this is ${process.version}; skipping its figures`);
+    env.log(`Lighthouse needs Node ${engines.node}, this is ${process.version}; skipping its figures`);
     return [];
   }
   const chrome = await chromeLauncher.launch({
@@ -548,11 +548,11 @@ async function lighthouseFigures(env: BenchEnv, url: string, base: string, child
     }
   } finally {
     process.removeListener("exit", killOnExit);
-    await chrome.kill();
+    chrome.kill();
   }
   const score = (l: Lhr) => (l.categories.performance?.score ?? 0) * 100;
   const sorted = [...runs].sort((a, b) => score(a) - score(b));
-  const mid = sorted[Math.floor((sorted.length - 1) / 2)]!;
+  const mid = sorted[Math.floor((sorted.length - 1) / 2)];
   printAudits(env, mid, base);
   if (process.env.BENCH_PUBLIC_LHR) {
     writeFileSync(process.env.BENCH_PUBLIC_LHR, JSON.stringify(mid, null, 1));

@@ -57,8 +57,8 @@ function rowsOf(results: BenchResult[]): string[][] {
 const HEAD = ["figure", "ours", "baseline", "ratio", "ratio is", "samples"];
 
 function textTable(rows: string[][]): string {
-  const widths = HEAD.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
-  const line = (cells: string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join("  ");
+  const widths = HEAD.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
+  const line = (cells: string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join("  ");
   return [line(HEAD), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
 }
 
@@ -115,7 +115,7 @@ function markdown(outcomes: Outcome[], words: string[]): string {
     if (o.results.length) {
       out.push(`| ${HEAD.join(" | ")} |`, "|---|---:|---:|---:|---|---:|");
       for (const [i, row] of rowsOf(o.results).entries()) {
-        const r = o.results[i]!;
+        const r = o.results[i];
         const cells = row.map(esc);
         if (r.failed) cells[0] = `**FAILED** ${esc(r.figure)}: ${esc(r.failed)}`;
         out.push(`| ${cells.join(" | ")} |`);

@@ -5,13 +5,13 @@ export function percentile(samples: readonly number[], p: number): number {
   if (!samples.length) return Number.NaN;
   const sorted = [...samples].sort((a, b) => a - b);
   const rank = Math.min(sorted.length, Math.max(1, Math.ceil((p / 100) * sorted.length)));
-  return sorted[rank - 1]!;
+  return sorted[rank - 1];
 }
 
 export type Rng = () => number;
 
 export const intBetween = (rng: Rng, min: number, max: number) => min + Math.floor(rng() * (max - min + 1));
-export const pickOne = <T>(rng: Rng, items: readonly T[]): T => items[Math.floor(rng() * items.length)]!;
+export const pickOne = <T>(rng: Rng, items: readonly T[]): T => items[Math.floor(rng() * items.length)];
 
 /** Picks from [value, weight] pairs. */
 export function pickWeighted<T>(rng: Rng, pairs: ReadonlyArray<readonly [T, number]>): T {
@@ -21,7 +21,7 @@ export function pickWeighted<T>(rng: Rng, pairs: ReadonlyArray<readonly [T, numb
     r -= weight;
     if (r < 0) return value;
   }
-  return pairs[pairs.length - 1]![0];
+  return pairs[pairs.length - 1][0];
 }
 
 /** A standard normal draw (Box–Muller). */

@@ -254,7 +254,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
   // The baseline pool is configured as the app's own (server/db/client.ts), but shares nothing with it.
   const bare = mysql.createPool({ uri: database.url, connectionLimit: 20, timezone: "Z", charset: "utf8mb4_unicode_ci", supportBigNumbers: true, decimalNumbers: true });
   bare.on("connection", (conn) => {
-    conn.query("SET time_zone = '+00:00'");
+    void conn.query("SET time_zone = '+00:00'");
   });
   let server: Awaited<ReturnType<typeof listen>> | undefined;
   try {
@@ -289,12 +289,12 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
       const [[rowResult], [countResult]] = await Promise.all([bare.query(rows.sql, rows.params), bare.query(count.sql, count.params)]);
       const ms = performance.now() - t0;
       const list = rowResult as Array<{ id: number }>;
-      return { ms, total: Number(Object.values((countResult as Array<Record<string, unknown>>)[0]!)[0]), ids: list.map((r) => r.id) };
+      return { ms, total: Number(Object.values((countResult as Array<Record<string, unknown>>)[0])[0]), ids: list.map((r) => r.id) };
     };
     let checked = 0;
     const check = (search: string, app: { total: number; ids: number[] }, base: { total: number; ids: number[] }) => {
       if (app.total !== base.total) throw new Error(`row count differs for ?${search}: app ${app.total}, mysql2 ${base.total}`);
-      if (app.ids.join() !== base.ids.join()) throw new Error(`page rows differ for ?${search}: app [${app.ids}] mysql2 [${base.ids}]`);
+      if (app.ids.join() !== base.ids.join()) throw new Error(`page rows differ for ?${search}: app [${app.ids.join()}] mysql2 [${base.ids.join()}]`);
       checked++;
     };
 
@@ -329,7 +329,7 @@ export async function run(env: BenchEnv): Promise<BenchResult[]> {
     const bareMs: number[] = [];
     const byGroup = new Map<string, { app: number[]; bare: number[] }>();
     for (let i = 0; i < SAMPLES; i++) {
-      const m = mixes[i % mixes.length]!;
+      const m = mixes[i % mixes.length];
       let app, base;
       if (i % 2 === 0) {
         app = await viaApp(m.search);

@@ -48,7 +48,7 @@ describe("marketing's feeds screen in Chromium", () => {
     // A portal fetches the feed.
     const res = await request(world.url).get(new URL(url).pathname).set("User-Agent", "TallowbridgePortal/1.0");
     expect(res.status).toBe(200);
-    const rows = parseCsv(res.text, { columns: true }) as Array<Record<string, string>>;
+    const rows = parseCsv<Record<string, string>>(res.text, { columns: true });
     expect(rows.some((r) => r["Model name"] === 'Loam, "Crest" Ωmega 🚙')).toBe(true);
 
     // The fetch is logged once its answer has gone (feeds.public.routes.ts), so the page may need a reload or two.

@@ -33,7 +33,7 @@ let server: ServerProcess;
 let workshop: Client;
 let sales: Client;
 /** A ready vehicle published again and again; vehicles that receive uploads. Kept apart, since a photo still processing rightly blocks a publish. */
-let publishIds: number[] = [];
+const publishIds: number[] = [];
 let uploadIds: number[] = [];
 const images: Buffer[] = [];
 let nextImage = 0;
@@ -69,7 +69,7 @@ afterAll(async () => {
   await world?.close();
 });
 
-const pick = <T>(xs: T[]) => xs[Math.floor(random() * xs.length)]!;
+const pick = <T>(xs: T[]) => xs[Math.floor(random() * xs.length)];
 
 /** A vehicle for uploads, made through the in-process app on the same database. */
 let plates = 0;
@@ -92,7 +92,7 @@ function replaceFull(vehicleId: number) {
 async function uploader() {
   for (;;) {
     const vehicleId = pick(uploadIds);
-    const files = Array.from({ length: 1 + Math.floor(random() * 2) }, (_, i) => ({ name: `walkround-${i}.jpg`, data: images[nextImage++ % images.length]! }));
+    const files = Array.from({ length: 1 + Math.floor(random() * 2) }, (_, i) => ({ name: `walkround-${i}.jpg`, data: images[nextImage++ % images.length] }));
     let res;
     try {
       res = await workshop.post(`/api/vehicles/${vehicleId}/photos`, photoForm(files));
@@ -131,7 +131,7 @@ const db = () => world.app.ctx.database.db;
 
 async function processingCount() {
   const [rows] = await world.app.ctx.database.pool.query("select count(*) as n from photos where status = 'processing'");
-  return Number((rows as Array<{ n: number }>)[0]!.n);
+  return Number((rows as Array<{ n: number }>)[0].n);
 }
 
 async function listFiles() {
@@ -316,13 +316,13 @@ describe("durability check at boot", () => {
     // Its own throwaway MariaDB, so SET GLOBAL cannot disturb the other test files on the run's server.
     const dir = mkdtempSync(path.join(tmpdir(), "forthright-fault-db-"));
     const ports = [await reservedPort(), await reservedPort(), await reservedPort()];
-    const instance = instanceFor(dir, ports[0]!);
+    const instance = instanceFor(dir, ports[0]);
     await startMariadb(instance);
     try {
       const credentials = { database: "fault_durability", user: "forthright_test", password: "test-password-not-secret" };
       provisionDatabase(instance, credentials);
       execFileSync(findBinary("mariadb") ?? findBinary("mysql")!, ["--no-defaults", `--socket=${instance.socket}`, "-uroot", "-e", "SET GLOBAL innodb_flush_log_at_trx_commit = 2"]);
-      const port = ports[1]!;
+      const port = ports[1];
       const uploads = mkdtempSync(path.join(tmpdir(), "forthright-fault-uploads-"));
       const lax = new ServerProcess(port, {
         ...process.env, NODE_ENV: "test", HOST: "127.0.0.1", PORT: String(port), DATABASE_URL: databaseUrl(instance, credentials),

@@ -45,7 +45,7 @@ async function untilReady(client: Client, vehicleId: number, count: number) {
   }
 }
 
-const urlsOf = (srcset: string) => srcset.split(", ").filter(Boolean).map((s) => s.split(" ")[0]!);
+const urlsOf = (srcset: string) => srcset.split(", ").filter(Boolean).map((s) => s.split(" ")[0]);
 
 describe("a server process knows its own port", () => {
   it("when another process already answers /api/health on the port, then start() refuses instead of trusting that answer", async () => {
@@ -81,9 +81,9 @@ describe("two instances on one database and one uploads folder", () => {
     const up = await onA.post(`/api/vehicles/${vehicleId}/photos`, photoForm([{ name: "front.jpg", data: await landscapeJpeg(1200, 800) }]));
     expect(up.status).toBe(201);
     const [photo] = await untilReady(onB, vehicleId, 1);
-    expect(photo!.status).toBe("ready");
+    expect(photo.status).toBe("ready");
     const types: Record<string, string> = { avif: "image/avif", webp: "image/webp", jpeg: "image/jpeg" };
-    for (const [format, srcset] of [["avif", photo!.srcsetAvif], ["webp", photo!.srcsetWebp], ["jpeg", photo!.srcsetJpeg]] as const) {
+    for (const [format, srcset] of [["avif", photo.srcsetAvif], ["webp", photo.srcsetWebp], ["jpeg", photo.srcsetJpeg]] as const) {
       const urls = urlsOf(srcset);
       // 1200 px wide: the 320, 640 and 1024 widths plus its own (PHOTO_WIDTHS in shared/constants/evidence.ts).
       expect(urls, format).toHaveLength(4);
@@ -125,7 +125,7 @@ describe("two instances on one database and one uploads folder", () => {
     const anyoneOnB = new Client(b.url);
     const before = (await anyoneOnB.get(`/api/public/vehicles/${slug}`)).body.vehicle.revision.number as number;
     const sales = await new Client(a.url).signIn("sales");
-    const vehicleId = (await world.app.ctx.database.pool.query("select id from vehicles where public_slug = ?", [slug]).then(([r]) => (r as Array<{ id: number }>)[0]!.id));
+    const vehicleId = (await world.app.ctx.database.pool.query("select id from vehicles where public_slug = ?", [slug]).then(([r]) => (r as Array<{ id: number }>)[0].id));
     const res = await sales.post(`/api/vehicles/${vehicleId}/publish`, {});
     expect(res.status).toBe(201);
     expect(res.body.revision.number).toBe(before + 1);
@@ -164,7 +164,7 @@ describe("two instances on one database and one uploads folder", () => {
     }
     for (const url of [a.url, b.url]) expect((await new Client(url).post(`/api/public/vehicles/${slug}/enquiries`, enquiry(99))).status, url).toBe(429);
     const [rows] = await world.app.ctx.database.pool.query("select count(*) as n from leads");
-    expect(Number((rows as Array<{ n: number }>)[0]!.n)).toBe(limit);
+    expect(Number((rows as Array<{ n: number }>)[0].n)).toBe(limit);
     console.log(`instances: A on ${a.url}, B on ${b.url}; session, sign-out, photo processing and serving, the named photo lock, the sign-in limit (${defaultLimits.signInPerAccount.points}) and the enquiry limit (${limit}) checked across both`);
   });
 });

@@ -24,7 +24,7 @@ export function pngDeclaring(width: number, height: number): Buffer {
   });
   const crc = (buf: Buffer) => {
     let c = 0xffffffff;
-    for (const b of buf) c = crcTable[(c ^ b) & 0xff]! ^ (c >>> 8);
+    for (const b of buf) c = crcTable[(c ^ b) & 0xff] ^ (c >>> 8);
     return (c ^ 0xffffffff) >>> 0;
   };
   const chunk = (type: string, data: Buffer) => {

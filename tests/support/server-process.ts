@@ -119,7 +119,7 @@ function listensOn(pid: number, port: number): boolean | undefined {
     for (const line of text.split("\n").slice(1)) {
       // sl local_address rem_address st tx:rx tr:when retrnsmt uid timeout inode
       const f = line.trim().split(/\s+/);
-      if (f.length > 9 && f[3] === "0A" && parseInt(f[1]!.split(":")[1]!, 16) === port) inodes.add(f[9]!);
+      if (f.length > 9 && f[3] === "0A" && parseInt(f[1].split(":")[1], 16) === port) inodes.add(f[9]);
     }
   }
   if (!readable) return undefined;
@@ -133,7 +133,7 @@ function listensOn(pid: number, port: number): boolean | undefined {
   for (const fd of fds) {
     try {
       const socket = /^socket:\[(\d+)\]$/.exec(readlinkSync(`/proc/${pid}/fd/${fd}`));
-      if (socket && inodes.has(socket[1]!)) return true;
+      if (socket && inodes.has(socket[1])) return true;
     } catch {
       // the descriptor closed meanwhile
     }
@@ -186,8 +186,8 @@ export class ServerProcess {
       for (const line of chunk.toString("utf8").split("\n")) if (line.trim()) this.lines.push(line);
       if (this.lines.length > 200) this.lines.splice(0, this.lines.length - 200);
     };
-    child.stdout!.on("data", keep);
-    child.stderr!.on("data", keep);
+    child.stdout.on("data", keep);
+    child.stderr.on("data", keep);
     this.exited = new Promise((resolve) =>
       child.once("exit", (code, signal) => {
         if (this.child === child) this.child = null;
@@ -267,7 +267,7 @@ export async function serverWorld(): Promise<ServerWorld> {
   const app = createApp(ctx);
   const servers: ServerProcess[] = [];
   const ports: number[] = [];
-  const t: TestApp = { app, ctx, ...agentsFor(app), close: async () => undefined };
+  const t: TestApp = { app, ctx, ...agentsFor(app), close: () => Promise.resolve() };
   const port = async () => {
     const p = await reservedPort();
     ports.push(p);
@@ -313,6 +313,15 @@ export async function serverWorld(): Promise<ServerWorld> {
   };
 }
 
+/** The body as JSON (typed `any`, like supertest's `res.body`), or null when it is empty or not JSON (a crash page). */
+function jsonOrNull(text: string) {
+  try {
+    return text ? JSON.parse(text) : null;
+  } catch {
+    return null;
+  }
+}
+
 /** A minimal HTTP client for a server process: fetch with our Origin and the session cookie carried by hand. */
 export class Client {
   cookie = "";
@@ -336,18 +345,12 @@ export class Client {
     }
     const res = await fetch(`${this.baseUrl}${url}`, { method, headers, body: payload, signal: init.signal, redirect: "manual" });
     for (const c of res.headers.getSetCookie()) {
-      const pair = c.split(";")[0]!;
+      const pair = c.split(";")[0];
       const [name, value] = [pair.slice(0, pair.indexOf("=")), pair.slice(pair.indexOf("=") + 1)];
       if (name === SESSION_COOKIE) this.cookie = value ? pair : "";
     }
     const text = await res.text();
-    let json: any = null;
-    try {
-      json = text ? JSON.parse(text) : null;
-    } catch {
-      json = null;
-    }
-    return { status: res.status, body: json, text, headers: res.headers };
+    return { status: res.status, body: jsonOrNull(text), text, headers: res.headers };
   }
 
   get = (url: string) => this.send("GET", url);

@@ -20,7 +20,7 @@ import { buildSnapshot } from "../../server/modules/publishing/snapshot.ts";
 import type { Evidence } from "../../server/modules/condition/condition.service.ts";
 import { Specifications } from "../../src/features/storefront/components/condition/Specifications.tsx";
 
-const spec = (f: string) => (VEHICLE_FIELDS as Record<string, FieldSpec>)[f]!;
+const spec = (f: string) => (VEHICLE_FIELDS as Record<string, FieldSpec>)[f];
 const PLATE = "QX 4471";
 
 // A plug-in hybrid with every field recorded, so every row of the public specification shows.
@@ -51,7 +51,7 @@ function snapshotOf(over: Record<string, unknown> = {}): PublicSnapshot {
     id: 1, dealershipId: 1, stockNumber: "FH-0101", status: "live", ...fields, odometerKmIndex: fields.odometerReading,
     stockedAt: new Date("2025-01-10T00:00:00Z"), createdAt: new Date("2025-01-10T00:00:00Z"), updatedAt: new Date("2025-01-10T00:00:00Z"), version: 1, ...over,
   } as unknown as Vehicle;
-  const derived = computeDerived({ ...row, odometerKm: row.odometerKmIndex } as never, { today: "2025-06-20", checkDigitMandatory: false });
+  const derived = computeDerived({ ...row, odometerKm: row.odometerKmIndex }, { today: "2025-06-20", checkDigitMandatory: false });
   return buildSnapshot(row, derived, evidence, dealership);
 }
 
@@ -134,7 +134,7 @@ describe("the vehicle field catalogue", () => {
     const prev = snapshotOf();
     const was = (f: string) => (prev as unknown as Record<string, unknown>)[f];
     const changed = Object.fromEntries(CHANGE_WORDS.map(([f]) => [f, typeof was(f) === "number" ? (was(f) as number) + 1 : `${String(was(f))}x`]));
-    const next = { ...prev, ...changed } as PublicSnapshot;
+    const next = { ...prev, ...changed };
     expect(describeChanges(prev, next)).toEqual([
       "Specification updated: VIN, build year, variant, colour, body, doors, seats, drive, fuel, engine capacity, cylinders, power, torque, transmission, " +
         "gears, kerb weight, tank size, fuel consumption, test cycle, battery, energy use, keys, previous owners.",

@@ -136,8 +136,8 @@ describe("conditionIndex properties", () => {
     fc.assert(
       fc.property(inputArb, defectArb, fc.nat(2), fc.nat(2), (input, d, a, b) => {
         const [lo, hi] = [Math.min(a, b), Math.max(a, b)];
-        const withLo = { ...input, defects: [...(input.defects ?? []), { ...d, severity: order[lo]! }] };
-        const withHi = { ...input, defects: [...(input.defects ?? []), { ...d, severity: order[hi]! }] };
+        const withLo = { ...input, defects: [...(input.defects ?? []), { ...d, severity: order[lo] }] };
+        const withHi = { ...input, defects: [...(input.defects ?? []), { ...d, severity: order[hi] }] };
         expect(index(withHi)).toBeLessThanOrEqual(index(withLo));
       }),
     );

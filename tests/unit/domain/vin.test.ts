@@ -64,8 +64,8 @@ describe("VIN structure", () => {
   it("when the VIN contains I, O or Q, then it is rejected with vin_forbidden_letter (TRADE.md §1.1, S)", () => {
     const issues = validateVinStructure("1G4AH59H45G11834O");
     expect(issues.map((i) => i.code)).toEqual(["vin_forbidden_letter"]);
-    expect(issues[0]!.positions).toEqual([17]);
-    expect(issues[0]!.severity).toBe("error");
+    expect(issues[0].positions).toEqual([17]);
+    expect(issues[0].severity).toBe("error");
   });
 
   it("when the length is not 17, then it is rejected with vin_length (TRADE.md §1.1, S [S1] 565.4(b))", () => {

@@ -83,15 +83,15 @@ describe("demo vehicles", () => {
       const vin = v.input.vin!;
       expect(vin).toMatch(/^[A-HJ-NPR-Z0-9]{17}$/);
       expect(vin[6]).toMatch(/[A-Z]/);
-      const first = MODEL_YEAR_CODES[vin[9]!];
-      expect([first, first! + 30]).toContain(v.input.buildYear);
+      const first = MODEL_YEAR_CODES[vin[9]];
+      expect([first, first + 30]).toContain(v.input.buildYear);
     }
   });
 
   it("when service histories are analysed, then exactly one vehicle has an odometer reading that goes down", () => {
     const flagged = vehicles.filter((v) => analyseServiceHistory(v.input.serviceHistory).odometerFlags.length > 0);
     expect(flagged.map((v) => `${v.input.make} ${v.input.model}`)).toEqual(["Drovell Cartway"]);
-    expect(analyseServiceHistory(flagged[0]!.input.serviceHistory).odometerFlags).toHaveLength(1);
+    expect(analyseServiceHistory(flagged[0].input.serviceHistory).odometerFlags).toHaveLength(1);
   });
 
   it("when service entries are read, then there are 0–8 per vehicle, dated from first registration to today, never above the odometer", () => {
