@@ -14,14 +14,20 @@ export async function main() {
   ctx.logger.info({ url: ctx.config.publicUrl }, "Forthright is listening");
   ctx.photoWorker.start();
   // Demo mode: our own mail catcher on loopback; production sends through the configured SMTP server only.
-  const fakeSmtp = ctx.config.demoMail ? await startFakeSmtp(ctx.database, ctx.config.FAKE_SMTP_PORT).catch((err) => (ctx.logger.warn({ err: err.message }, "demo mail catcher not started (port in use?); mail waits in the outbox"), null)) : null;
+  const fakeSmtp = ctx.config.demoMail
+    ? await startFakeSmtp(ctx.database, ctx.config.FAKE_SMTP_PORT).catch((err: unknown) => {
+        const message = err instanceof Error ? err.message : String(err);
+        ctx.logger.warn({ err: message }, "demo mail catcher not started (port in use?); mail waits in the outbox");
+        return null;
+      })
+    : null;
   ctx.mail.start();
   const cleanup = () =>
     removeOrphans(ctx.database, ctx.storage, ctx.uploadsDir)
       .then((removed) => removed.length && ctx.logger.info({ removed: removed.length }, "removed orphaned files"))
       .catch((err) => ctx.logger.error({ err }, "orphan clean-up failed"));
   void cleanup();
-  setInterval(cleanup, 60 * 60 * 1000).unref();
+  setInterval(() => void cleanup(), 60 * 60 * 1000).unref();
 
   let stopping = false;
   const stop = (signal: string) => {
@@ -30,12 +36,19 @@ export async function main() {
     ctx.logger.info({ signal }, "shutting down");
     const force = setTimeout(() => process.exit(1), 10_000);
     force.unref();
-    server.close(async () => {
+    const finish = async () => {
       await ctx.photoWorker.stop().catch(() => undefined);
       await ctx.mail.stop().catch(() => undefined);
       await fakeSmtp?.close().catch(() => undefined);
       await ctx.database.close().catch(() => undefined);
       process.exit(0);
+    };
+    // Each step above already swallows its own failure; this catch is for the unexpected, which still exits.
+    server.close(() => {
+      void finish().catch((err: unknown) => {
+        ctx.logger.error({ err }, "shutdown failed");
+        process.exit(1);
+      });
     });
     server.closeIdleConnections();
   };

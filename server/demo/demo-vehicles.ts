@@ -364,7 +364,7 @@ const addDays = (date: CalendarDate, days: number) => fromDayNumber(dayNumber(da
 const iso = formatIsoDate;
 
 function modelYearCode(year: number): string {
-  const code = Object.keys(MODEL_YEAR_CODES).find((c) => (year - MODEL_YEAR_CODES[c]!) % 30 === 0);
+  const code = Object.keys(MODEL_YEAR_CODES).find((c) => (year - MODEL_YEAR_CODES[c]) % 30 === 0);
   if (!code) throw new Error(`No model-year code for ${year}.`);
   return code;
 }
@@ -391,7 +391,15 @@ function priceCents(line: Line, ageYears: number, odometerKm: number): number {
   return Math.max(8_990, Math.round(dollars / 500) * 500 - 10) * 100;
 }
 
-function serviceHistory(faker: Faker, plan: Plan, reg: CalendarDate, stock: CalendarDate, today: CalendarDate, odometerAtStockKm: number, odometerKm: number): ServiceEntryInput[] {
+function serviceHistory(
+  faker: Faker,
+  plan: Plan,
+  reg: CalendarDate,
+  stock: CalendarDate,
+  today: CalendarDate,
+  odometerAtStockKm: number,
+  odometerKm: number,
+): ServiceEntryInput[] {
   const regDay = dayNumber(reg);
   const stockDay = dayNumber(stock);
   const ownerEnd = dayNumber(addMonths(addDays(stock, -10), -(plan.gapMonths ?? 0)));
@@ -414,7 +422,7 @@ function serviceHistory(faker: Faker, plan: Plan, reg: CalendarDate, stock: Cale
   for (const extra of plan.extras ?? []) {
     const after = rows[rows.length - 1 - extra.gap];
     if (!after) continue;
-    const before = extra.gap === 0 ? { day: ownerEnd, km: Math.max(after.km, kmAt(ownerEnd)) } : rows[rows.length - extra.gap]!;
+    const before = extra.gap === 0 ? { day: ownerEnd, km: Math.max(after.km, kmAt(ownerEnd)) } : rows[rows.length - extra.gap];
     const day = Math.floor((after.day + before.day) / 2);
     if (day <= after.day || day >= before.day) continue;
     extras.push({ day, km: Math.round((after.km + before.km) / 2), kind: extra.kind, workshop: extra.workshop ?? workshop, notes: extra.notes });
@@ -440,9 +448,9 @@ function serviceHistory(faker: Faker, plan: Plan, reg: CalendarDate, stock: Cale
   if (plan.odometerDecrease && kept.length >= 3) {
     // A misread digit in one stamp: the reading falls below the entry before it, then recovers.
     const k = kept.length - 2;
-    const previous = kept[k - 1]!.km;
-    const original = kept[k]!.km;
-    kept[k]!.km = original - 10_000 * Math.ceil((original - previous + 1) / 10_000);
+    const previous = kept[k - 1].km;
+    const original = kept[k].km;
+    kept[k].km = original - 10_000 * Math.ceil((original - previous + 1) / 10_000);
   }
   return [...kept, ...ours].map((r) => ({ date: iso(fromDayNumber(r.day)), odometerKm: r.km, kind: r.kind, workshop: r.workshop, notes: r.notes }));
 }

@@ -9,7 +9,7 @@ import type { Db } from "../db/client.ts";
 import { checkResults, defects, photos, tyreReadings, vehicles, zoneMarks } from "../db/schema/index.ts";
 import type { Storage } from "../lib/storage.ts";
 import { prepareMaster, makeCloseup } from "../modules/photos/photos.service.ts";
-import { renderDemoPhoto, ANGLE_ZONE, type Angle, type BodyType } from "./art/index.ts";
+import { renderDemoPhoto, ANGLE_ZONE, type Angle } from "./art/index.ts";
 import { CHECK_ITEMS, ZONES, type Zone } from "../../shared/constants/evidence.ts";
 import { dayIn } from "../lib/clock.ts";
 
@@ -41,8 +41,8 @@ export async function seedDemoEvidence(db: Db, storage: Storage, dealershipId: n
   const list = await db.select().from(vehicles).where(eq(vehicles.dealershipId, dealershipId));
   for (const v of list) {
     const rnd = rng(v.id * 7919);
-    const angles = ANGLES_BY_STATUS[v.status] ?? ANGLES_BY_STATUS.default!;
-    const bodyType = (v.bodyType ?? "sedan") as BodyType;
+    const angles = ANGLES_BY_STATUS[v.status] ?? ANGLES_BY_STATUS.default;
+    const bodyType = v.bodyType ?? "sedan";
     const odometerText = v.odometerReading != null ? `${v.odometerReading.toLocaleString("en-AU").replace(/,/g, " ")} ${v.odometerUnit}` : undefined;
     const stored: Array<{ id: number; angle: Angle; width: number; height: number; masterKey: string }> = [];
     // Drawing is the slow part; the two cores draw a vehicle's photos side by side.
@@ -51,7 +51,7 @@ export async function seedDemoEvidence(db: Db, storage: Storage, dealershipId: n
       angles.map(async (angle) => prepareMaster(await sharp(await renderDemoPhoto({ bodyType, colour: v.colour ?? "White", angle, seed: v.id, odometerText })).resize(1280).jpeg({ quality: 84 }).toBuffer())),
     );
     for (const [i, angle] of angles.entries()) {
-      const master = masters[i]!;
+      const master = masters[i];
       await storage.put(master.key, master.buffer);
       const [res] = await db.insert(photos).values({
         vehicleId: v.id, position: i + 1, isCover: i === 0, caption: "", zone: ANGLE_ZONE[angle] as Zone, hash: master.hash, masterKey: master.key,
@@ -97,10 +97,10 @@ export async function seedDemoEvidence(db: Db, storage: Storage, dealershipId: n
     );
     const failedBrakes = v.status === "preparing" && v.id % 3 === 1;
     await db.insert(checkResults).values(
-      CHECK_ITEMS.map((item) => ({
+      CHECK_ITEMS.map((item): typeof checkResults.$inferInsert => ({
         vehicleId: v.id,
         item,
-        result: (item === "brakes" && failedBrakes ? "fail" : item === "climate" && rnd() < 0.2 ? "advise" : item === "keys" && (v.keysCount ?? 2) < 2 ? "advise" : "pass") as "pass" | "advise" | "fail",
+        result: item === "brakes" && failedBrakes ? "fail" : item === "climate" && rnd() < 0.2 ? "advise" : item === "keys" && (v.keysCount ?? 2) < 2 ? "advise" : "pass",
         note: item === "brakes" && failedBrakes ? "Rear pads below 2 mm; discs scored. Replace pads and discs before sale." : item === "keys" && (v.keysCount ?? 2) < 2 ? "One key only; a spare can be cut and coded." : "",
         checkedOn: measuredOn,
         checkedBy: "Wren Tallis",

@@ -5,7 +5,11 @@ import { seedDemoEvidence } from "./evidence.ts";
 import { publishDemoVehicles } from "./publish.ts";
 
 /** Capabilities beyond the foundation add their demo records here, in dependency order. */
-export async function seedDemoExtensions(db: Db, dealershipId: number, options: { storage?: Storage; publicUrl?: string; log?: (line: string) => void }): Promise<void> {
+export async function seedDemoExtensions(
+  db: Db,
+  dealershipId: number,
+  options: { storage?: Storage; publicUrl?: string; log?: (line: string) => void },
+): Promise<void> {
   const log = options.log ?? (() => undefined);
   await seedDemoVehicles(db, dealershipId);
   log("  30 demo vehicles in stock.");

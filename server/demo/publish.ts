@@ -13,7 +13,7 @@ const PUBLISHED: VehicleStatus[] = ["live", "reserved", "sold", "withdrawn"];
 async function twoAtATime<T>(items: T[], job: (item: T) => Promise<void>) {
   let next = 0;
   await Promise.all([0, 1].map(async () => {
-    while (next < items.length) await job(items[next++]!);
+    while (next < items.length) await job(items[next++]);
   }));
 }
 
@@ -28,15 +28,15 @@ export async function publishDemoVehicles(db: Db, storage: Storage, dealershipId
   const pending = await db.select().from(photos).where(inArray(photos.vehicleId, ids));
   await twoAtATime(pending, (p) => makeSizesNow(db, storage, p));
   const [seller] = await db.select().from(users).where(eq(users.email, "sales@demo.test"));
-  const actor = { id: seller!.id, email: seller!.email, name: seller!.name, role: seller!.role, active: true, dealershipId };
+  const actor = { id: seller.id, email: seller.email, name: seller.name, role: seller.role, active: true, dealershipId };
   const ctx = { database: { db }, now: () => new Date(), config: { publicUrl } } as unknown as AppContext;
   for (const v of targets.filter((t) => ids.includes(t.id))) {
     // Publishing starts from "preparing"; afterwards the vehicle returns to the status the scenario gives it.
     await db.update(vehicles).set({ status: "preparing" }).where(eq(vehicles.id, v.id));
-    await publish(ctx, actor as never, v.id, {});
+    await publish(ctx, actor, v.id, {});
     if (v.status !== "live") {
       await db.update(vehicles).set({ status: v.status }).where(eq(vehicles.id, v.id));
-      await db.insert(vehicleEvents).values({ vehicleId: v.id, fromStatus: "live", toStatus: v.status, note: "", userId: seller!.id, userName: seller!.name });
+      await db.insert(vehicleEvents).values({ vehicleId: v.id, fromStatus: "live", toStatus: v.status, note: "", userId: seller.id, userName: seller.name });
     }
   }
 }

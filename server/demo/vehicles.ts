@@ -12,7 +12,7 @@ function pathTo(target: VehicleStatus): VehicleStatus[] {
   const queue: VehicleStatus[][] = [["intake"]];
   while (queue.length) {
     const path = queue.shift()!;
-    const last = path[path.length - 1]!;
+    const last = path[path.length - 1];
     if (last === target) return path;
     for (const m of STATUS_MOVES) if (m.from === last && !path.includes(m.to)) queue.push([...path, m.to]);
   }
@@ -22,10 +22,10 @@ function pathTo(target: VehicleStatus): VehicleStatus[] {
 export async function seedDemoVehicles(db: Db, dealershipId: number, now = new Date()): Promise<void> {
   const [d] = await db.select().from(dealerships).where(eq(dealerships.id, dealershipId));
   const staff = await db.select().from(users).where(eq(users.dealershipId, dealershipId));
-  const sales = staff.find((u) => u.role === "sales") ?? staff[0]!;
+  const sales = staff.find((u) => u.role === "sales") ?? staff[0];
   const workshop = staff.find((u) => u.role === "workshop") ?? sales;
-  const today = dayIn(d!.timeZone, now);
-  let stock = d!.lastStockNumber;
+  const today = dayIn(d.timeZone, now);
+  let stock = d.lastStockNumber;
   await db.transaction(async (tx) => {
     for (const demo of demoVehicles(today)) {
       const { odometerKm, ...input } = demo.input;
@@ -39,7 +39,7 @@ export async function seedDemoVehicles(db: Db, dealershipId: number, now = new D
         stockNumber: String(stock),
         status: demo.status,
         odometerKmIndex: row.odometerReading,
-        derived: deriveFor(row as never, d!, today),
+        derived: deriveFor(row as never, d, today),
         stockedAt,
         createdAt: stockedAt,
       });
@@ -48,7 +48,7 @@ export async function seedDemoVehicles(db: Db, dealershipId: number, now = new D
       await tx.insert(vehicleEvents).values(
         steps.map((to, i) => ({
           vehicleId: res.insertId,
-          fromStatus: i === 0 ? null : steps[i - 1]!,
+          fromStatus: i === 0 ? null : steps[i - 1],
           toStatus: to,
           note: i === 0 ? "Taken into stock" : "",
           userId: (to === "preparing" ? workshop : sales).id,

@@ -14,7 +14,7 @@ export function originCheck(allowedOrigins: string[]): RequestHandler {
     const origin = req.get("origin");
     const host = req.get("host");
     if (origin && origin !== "null") {
-      let parsed: URL | null = null;
+      let parsed: URL | null;
       try {
         parsed = new URL(origin);
       } catch {

@@ -87,9 +87,7 @@ export function allow(action: Allow): RequestHandler {
   return guard;
 }
 
-const noDay = async (): Promise<DealershipDay> => {
-  throw unauthorized();
-};
+const noDay = (): Promise<DealershipDay> => Promise.reject(unauthorized());
 
 const WHAT: Record<Part, string> = { params: "address", query: "query", body: "form" };
 
@@ -115,7 +113,12 @@ function parsedOf(res: Response): ParsedParts {
  * handler's result is sent as JSON (with `spec.status`) unless the handler answered itself (a stream, a 204, a
  * redirect) or returned nothing.
  */
-export function route<A extends Allow, P extends SchemaFor | undefined = undefined, Q extends SchemaFor | undefined = undefined, B extends SchemaFor | undefined = undefined>(
+export function route<
+  A extends Allow,
+  P extends SchemaFor | undefined = undefined,
+  Q extends SchemaFor | undefined = undefined,
+  B extends SchemaFor | undefined = undefined,
+>(
   spec: RouteSpec<A, P, Q, B>,
   handler: (input: RouteInput<A, P, Q, B>) => unknown,
 ): RequestHandler[] {

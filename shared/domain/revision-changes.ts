@@ -1,11 +1,11 @@
 // What changed between two published revisions, in sentences a buyer can read. Pure.
 import type { PublicDefect, PublicSnapshot } from "../schemas/public.ts";
-import { DEFECT_KIND_LABELS, SEVERITY_LABELS, ZONE_LABELS, CHECK_LABELS, type DefectKind, type Severity, type Zone, type CheckItem } from "../constants/evidence.ts";
+import { DEFECT_KIND_LABELS, SEVERITY_LABELS, ZONE_LABELS, CHECK_LABELS, type DefectKind, type Zone, type CheckItem } from "../constants/evidence.ts";
 import { CHANGE_WORDS, type VehicleFieldName } from "../constants/vehicle-fields.ts";
 import { formatMoney, formatNumber, THIN_SPACE } from "./display.ts";
 
 const describe = (d: PublicDefect) =>
-  `${SEVERITY_LABELS[d.severity as Severity].toLowerCase()} ${DEFECT_KIND_LABELS[d.kind as DefectKind].toLowerCase()} (${ZONE_LABELS[d.zone as Zone]?.toLowerCase() ?? d.zone})`;
+  `${SEVERITY_LABELS[d.severity].toLowerCase()} ${DEFECT_KIND_LABELS[d.kind as DefectKind].toLowerCase()} (${ZONE_LABELS[d.zone as Zone]?.toLowerCase() ?? d.zone})`;
 
 // The words for each field come from the field catalogue, in its order.
 const SPEC_FIELDS = CHANGE_WORDS as ReadonlyArray<readonly [keyof PublicSnapshot & VehicleFieldName, string]>;

@@ -44,7 +44,7 @@ const ABSENT: Record<string, string> = {
 };
 
 const call = (agent: Agent | request.SuperTest<request.Test>, r: RouteEntry, values: Record<string, string> = ABSENT) =>
-  (agent as unknown as Record<string, (url: string) => request.Test>)[r.method.toLowerCase()]!(samplePath(r.path, values));
+  (agent as unknown as Record<string, (url: string) => request.Test>)[r.method.toLowerCase()](samplePath(r.path, values));
 
 const isApiNoRoute = (res: request.Response) => res.status === 404 && /^No API route/.test(String(res.body?.error?.message ?? ""));
 
@@ -120,8 +120,8 @@ describe("route × role matrix", () => {
 describe("session cookie", () => {
   const parseCookie = (header: string) => {
     const [pair, ...attrs] = header.split(";").map((s) => s.trim());
-    const [name, value] = pair!.split("=");
-    return { name, value, attrs: Object.fromEntries(attrs.map((a) => { const [k, v] = a.split("="); return [k!.toLowerCase(), v ?? true]; })) };
+    const [name, value] = pair.split("=");
+    return { name, value, attrs: Object.fromEntries(attrs.map((a) => { const [k, v] = a.split("="); return [k.toLowerCase(), v ?? true]; })) };
   };
   const sessionCookie = (res: request.Response) => {
     const list = ([] as string[]).concat(res.headers["set-cookie"] ?? []);
@@ -153,7 +153,7 @@ describe("session cookie", () => {
       const res = await request(createApp(ctx))
         .post("/api/auth/sign-in")
         .set("Origin", publicUrl)
-        .send({ email: DEMO_USERS[0]!.email, password: DEMO_PASSWORD });
+        .send({ email: DEMO_USERS[0].email, password: DEMO_PASSWORD });
       expect(res.status).toBe(200);
       const c = sessionCookie(res)!;
       expect(c.attrs.secure).toBe(true);
@@ -217,11 +217,11 @@ describe("CSRF", () => {
     const mutating = routes.filter((r) => STATE_CHANGING.has(r.method));
     expect(mutating.length).toBeGreaterThan(25);
     for (const r of mutating) {
-      const values = r.key.startsWith("PATCH /api/users/") ? { ...real, id: users[1]!.id } : real;
+      const values = r.key.startsWith("PATCH /api/users/") ? { ...real, id: users[1].id } : real;
       for (const [what, headers] of variants) {
         let req = call(bare, r, values);
         for (const [k, v] of Object.entries(headers)) req = req.set(k, v);
-        const res = await req.send((VALID[r.key] ?? {}) as object);
+        const res = await req.send(VALID[r.key] ?? {});
         requests++;
         if (res.status !== 403 || res.body?.error?.code !== "cross_origin") wrong.push(`${r.key} with ${what}: ${res.status} ${JSON.stringify(res.body?.error ?? "")}`);
       }
@@ -288,8 +288,8 @@ describe("uploads and served media", () => {
   it("when a media key falls outside the pattern (traversal, .html, .svg, a suffix), then 404 and never a file", async () => {
     const w = agents.get("workshop")!;
     const listed = JSON.stringify((await w.get(`/api/vehicles/${vehicleId}/photos`)).body);
-    const real = [...listed.matchAll(/\/media\/(photos\/[a-f0-9]{2}\/[a-f0-9]{64})(-[a-z0-9]+)?\.(jpg|webp|avif)/g)][0]!;
-    const stem = real[1]!;
+    const real = [...listed.matchAll(/\/media\/(photos\/[a-f0-9]{2}\/[a-f0-9]{64})(-[a-z0-9]+)?\.(jpg|webp|avif)/g)][0];
+    const stem = real[1];
     const bad = [
       "/media/../package.json", "/media/%2e%2e/%2e%2e/etc/passwd", "/media/..%2f..%2fpackage.json", "/media/photos/../../package.json",
       `/media/${stem}.html`, `/media/${stem}.svg`, `/media/${stem}.jpg.html`, `/media/${stem}.jpg%00.html`, `/media/${stem}.jpg.partial`,
@@ -317,7 +317,7 @@ describe("security headers", () => {
   const csp = (res: request.Response) => {
     const header = String(res.headers["content-security-policy"] ?? "");
     return Object.fromEntries(
-      header.split(";").map((d) => d.trim()).filter(Boolean).map((d) => { const [name, ...values] = d.split(/\s+/); return [name!.toLowerCase(), values]; }),
+      header.split(";").map((d) => d.trim()).filter(Boolean).map((d) => { const [name, ...values] = d.split(/\s+/); return [name.toLowerCase(), values]; }),
     ) as Record<string, string[]>;
   };
 
@@ -372,13 +372,13 @@ describe("security headers", () => {
       const scripts = [...html.matchAll(/<script\b([^>]*)>([\s\S]*?)<\/script\s*>/gi)];
       expect(scripts.length, url).toBeGreaterThan(0);
       for (const [, attrs, body] of scripts) {
-        const type = /\btype\s*=\s*["']?([^"'\s>]+)/i.exec(attrs!)?.[1]?.toLowerCase();
-        const external = /\bsrc\s*=/i.test(attrs!);
+        const type = /\btype\s*=\s*["']?([^"'\s>]+)/i.exec(attrs)?.[1]?.toLowerCase();
+        const external = /\bsrc\s*=/i.test(attrs);
         // A data block (a non-JavaScript MIME type) is never run (HTML Living Standard §4.12.1.1).
         const dataBlock = type === "application/json" || type === "application/ld+json";
-        expect(external || dataBlock, `${url}: inline script ${attrs} ${body!.slice(0, 80)}`).toBe(true);
-        if (external) expect(body!.trim(), `${url}: an external script with inline code`).toBe("");
-        if (dataBlock) expect(body!, `${url}: a data block that could close its own tag`).not.toMatch(/<\/script|<!--/i);
+        expect(external || dataBlock, `${url}: inline script ${attrs} ${body.slice(0, 80)}`).toBe(true);
+        if (external) expect(body.trim(), `${url}: an external script with inline code`).toBe("");
+        if (dataBlock) expect(body, `${url}: a data block that could close its own tag`).not.toMatch(/<\/script|<!--/i);
       }
       expect(html, url).not.toMatch(/\son[a-z]+\s*=/i);
       expect(html, url).not.toMatch(/javascript:/i);

@@ -82,7 +82,7 @@ const asPaths = (raw: unknown, where: string): string[] => {
 };
 
 /** Parameter names of a path-to-regexp 8 pattern (`:id`, `*splat`, inside optional `{…}` groups too). */
-export const paramNames = (path: string) => [...path.matchAll(/[:*]([A-Za-z_$][\w$]*)/g)].map((m) => m[1]!);
+export const paramNames = (path: string) => [...path.matchAll(/[:*]([A-Za-z_$][\w$]*)/g)].map((m) => m[1]);
 
 /**
  * A concrete path for a pattern: each `:name` and `*name` replaced by values[name] (already URL-encoded by the

@@ -66,7 +66,14 @@ function interiorFront(ctx: SceneCtx): string {
   for (const cx of [460 + dx * 0.5, 1140 + dx * 0.5]) {
     svg.poly(rr(cx - 95, 560, 190, 150, 55), shade(t.seat, 0.05), `stroke="${shade(t.seat, -0.35)}" stroke-width="6"`);
     svg.poly([[cx - 40, 705], [cx - 30, 760], [cx + 30, 760], [cx + 40, 705]], "#8f9398");
-    const back = roundCorners([{ x: cx - 230, y: H + 40, r: 0 }, { x: cx - 250, y: 820, r: 90 }, { x: cx - 200, y: 740, r: 120 }, { x: cx + 200, y: 740, r: 120 }, { x: cx + 250, y: 820, r: 90 }, { x: cx + 230, y: H + 40, r: 0 }], true, 6);
+    const back = roundCorners(
+      [
+        { x: cx - 230, y: H + 40, r: 0 }, { x: cx - 250, y: 820, r: 90 }, { x: cx - 200, y: 740, r: 120 },
+        { x: cx + 200, y: 740, r: 120 }, { x: cx + 250, y: 820, r: 90 }, { x: cx + 230, y: H + 40, r: 0 },
+      ],
+      true,
+      6,
+    );
     svg.poly(back, svg.linear(cx - 250, 0, cx + 250, 0, [[0, shade(t.seat, -0.25)], [0.45, shade(t.seat, 0.12)], [1, shade(t.seat, -0.3)]]), `stroke="${shade(t.seat, -0.4)}" stroke-width="6"`);
     svg.line([[cx - 120, 790], [cx - 140, H]], shade(t.seat, -0.3), 6);
     svg.line([[cx + 120, 790], [cx + 140, H]], shade(t.seat, -0.3), 6);
@@ -121,7 +128,12 @@ function dashboard(ctx: SceneCtx): string {
 }
 
 /** One-point-perspective room: near rectangle, far rectangle (the opening seen into the vehicle). */
-function room(svg: Svg, n: [number, number, number, number], f: [number, number, number, number], c: { floor: string; wall: string; back: string; ceil?: string }): void {
+function room(
+  svg: Svg,
+  n: [number, number, number, number],
+  f: [number, number, number, number],
+  c: { floor: string; wall: string; back: string; ceil?: string },
+): void {
   const [nx0, ny0, nx1, ny1] = n;
   const [fx0, fy0, fx1, fy1] = f;
   if (c.ceil) svg.poly([[nx0, ny0], [nx1, ny0], [fx1, fy0], [fx0, fy0]], c.ceil);
@@ -187,7 +199,10 @@ function cargo(ctx: SceneCtx): string {
   svg.poly(rr(810 + dx, sTop, 350, 760 - sTop, 30), shade(seat, -0.1));
   if (!low) for (const hx of [520, 1000]) svg.poly(rr(hx + dx, sTop - 70, 130, 90, 30), shade(seat, 0.05));
   svg.poly([[250 + dx, 930], [1350 + dx, 930], [1380 + dx, 975], [220 + dx, 975]], "#b8bdc2");
-  svg.poly([[0 + dx, 990], [1600 + dx, 990], [1600 + dx, H], [0 + dx, H]], svg.linear(0, 990, 0, H, [[0, shade(paint, -0.1)], [0.6, shade(paint, -0.3)], [0.61, TRIM], [1, TRIM]]));
+  svg.poly(
+    [[0 + dx, 990], [1600 + dx, 990], [1600 + dx, H], [0 + dx, H]],
+    svg.linear(0, 990, 0, H, [[0, shade(paint, -0.1)], [0.6, shade(paint, -0.3)], [0.61, TRIM], [1, TRIM]]),
+  );
   svg.poly([[70 + dx, top], [250 + dx, top], [240 + dx, top + 200], [80 + dx, top + 190]], lamp, `stroke="#5a0c10" stroke-width="8"`);
   svg.poly([[1530 + dx, top], [1350 + dx, top], [1360 + dx, top + 200], [1520 + dx, top + 190]], lamp, `stroke="#5a0c10" stroke-width="8"`);
   // The raised lid, seen from below.
@@ -247,7 +262,12 @@ function wheel(ctx: SceneCtx): string {
     const sa = Math.sin(a);
     const r0 = rim * 0.2;
     const r1 = rim * 0.92;
-    const spoke: P2[] = [[r0 * ca - w * sa, r0 * sa + w * ca], [r1 * ca - w * 1.7 * sa, r1 * sa + w * 1.7 * ca], [r1 * ca + w * 1.7 * sa, r1 * sa - w * 1.7 * ca], [r0 * ca + w * sa, r0 * sa - w * ca]];
+    const spoke: P2[] = [
+      [r0 * ca - w * sa, r0 * sa + w * ca],
+      [r1 * ca - w * 1.7 * sa, r1 * sa + w * 1.7 * ca],
+      [r1 * ca + w * 1.7 * sa, r1 * sa - w * 1.7 * ca],
+      [r0 * ca + w * sa, r0 * sa - w * ca],
+    ];
     svg.poly(spoke, svg.linear(spoke[0][0], spoke[0][1], spoke[2][0], spoke[2][1], [[0, "#d9dde1"], [0.5, "#b9bfc5"], [1, "#8e949a"]]), `stroke="#6f757b" stroke-width="3"`);
   }
   svg.add(`<circle r="${num(rim * 0.26)}" fill="${svg.linear(-50, -50, 50, 50, [[0, "#e3e6e9"], [1, "#8f959b"]])}" stroke="#6b7076" stroke-width="4"/>`);

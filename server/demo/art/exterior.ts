@@ -110,7 +110,12 @@ export function drawCar(svg: Svg, spec: BodySpec, look: CarLook, cam: Camera): v
   const sideVis = (s: number) => facing([0, 0, s], cam) > 0.05;
 
   // Ground shadow.
-  const fp: P3[] = [[-L2 - 60, 0, -spec.width / 2 - 60], [L2 + 60, 0, -spec.width / 2 - 60], [L2 + 60, 0, spec.width / 2 + 60], [-L2 - 60, 0, spec.width / 2 + 60]];
+  const fp: P3[] = [
+    [-L2 - 60, 0, -spec.width / 2 - 60],
+    [L2 + 60, 0, -spec.width / 2 - 60],
+    [L2 + 60, 0, spec.width / 2 + 60],
+    [-L2 - 60, 0, spec.width / 2 + 60],
+  ];
   svg.poly(fp.map(scr), "#000", `opacity="0.38" filter="${svg.blur(110)}"`);
   svg.poly(fp.map((p) => scr([p[0] * 0.9, 0, p[2] * 0.85])), "#000", `opacity="0.35" filter="${svg.blur(35)}"`);
 
@@ -135,7 +140,12 @@ export function drawCar(svg: Svg, spec: BodySpec, look: CarLook, cam: Camera): v
       const r1 = spec.rimR * 0.92;
       const ca = Math.cos(a);
       const sa = Math.sin(a);
-      const spoke: P2[] = [[r0 * ca - w * sa, r0 * sa + w * ca], [r1 * ca - w * 1.6 * sa, r1 * sa + w * 1.6 * ca], [r1 * ca + w * 1.6 * sa, r1 * sa - w * 1.6 * ca], [r0 * ca + w * sa, r0 * sa - w * ca]];
+      const spoke: P2[] = [
+        [r0 * ca - w * sa, r0 * sa + w * ca],
+        [r1 * ca - w * 1.6 * sa, r1 * sa + w * 1.6 * ca],
+        [r1 * ca + w * 1.6 * sa, r1 * sa - w * 1.6 * ca],
+        [r0 * ca + w * sa, r0 * sa - w * ca],
+      ];
       svg.poly(spoke.map(([u, v]) => scr([cx + u, spec.wheelR + v, zo + s * 3])), i % 2 ? "#c5cacf" : "#b7bcc2");
     }
     svg.poly(circle(cx, spec.wheelR, spec.rimR * 0.24, 24).map(([x, y]) => scr([x, y, zo + s * 4])), "#c9ced3");
@@ -336,7 +346,12 @@ export function drawCar(svg: Svg, spec: BodySpec, look: CarLook, cam: Camera): v
   const ws = spec.windscreenOnly;
   const drawWs = () => {
     if (!ws) return;
-    const q: P3[] = [[ws[0] - L2, ws[1], spec.width * 0.46], [ws[2] - L2, ws[3], spec.width * 0.43], [ws[2] - L2, ws[3], -spec.width * 0.43], [ws[0] - L2, ws[1], -spec.width * 0.46]];
+    const q: P3[] = [
+      [ws[0] - L2, ws[1], spec.width * 0.46],
+      [ws[2] - L2, ws[3], spec.width * 0.43],
+      [ws[2] - L2, ws[3], -spec.width * 0.43],
+      [ws[0] - L2, ws[1], -spec.width * 0.46],
+    ];
     svg.poly(q.map(scr), mix(GLASS, look.sky, 0.3), `opacity="0.72" stroke="${shade(look.paint, -0.3)}" stroke-width="26" stroke-linejoin="round"`);
   };
   const wsDepth = ws ? depth([(ws[0] + ws[2]) / 2 - L2, ws[3], 0]) : 0;
@@ -357,7 +372,11 @@ export function carBounds(spec: BodySpec, cam: Camera): { x0: number; x1: number
   const pts: P3[] = [];
   for (const s of [1, -1]) for (const [x, y] of P.side) pts.push([x - spec.length / 2, y, s * (P.hw(y) + (y > spec.belt ? 0 : 90))]);
   for (const a of [spec.frontAxle, spec.frontAxle + spec.wheelbase]) for (const s of [1, -1]) pts.push([a - spec.length / 2, 0, s * spec.width / 2]);
-  for (const b of spec.boxes ?? []) for (const x of b.x) for (const y of b.y) for (const s of [1, -1]) pts.push([x - spec.length / 2, y, (b.z ?? 0) + s * b.hz]);
+  for (const b of spec.boxes ?? []) {
+    for (const x of b.x) for (const y of b.y) for (const s of [1, -1]) pts.push([x - spec.length / 2, y, (b.z ?? 0) + s * b.hz]);
+  }
   const q = pts.map((p) => project(p, cam));
-  return { x0: Math.min(...q.map((p) => p[0])), x1: Math.max(...q.map((p) => p[0])), y0: -Math.max(...q.map((p) => p[1])), y1: -Math.min(...q.map((p) => p[1])) };
+  const xs = q.map((p) => p[0]);
+  const ys = q.map((p) => p[1]);
+  return { x0: Math.min(...xs), x1: Math.max(...xs), y0: -Math.max(...ys), y1: -Math.min(...ys) };
 }

@@ -58,7 +58,9 @@ export interface BodySpec {
   rearFaceX?: number; // where the rear lamps sit when the body ends before the vehicle does (cab chassis)
 }
 
-const car = (o: Partial<FrontRear> = {}): FrontRear => ({ lampY: [620, 760], lampU: [0.5, 0.93], grilleY: [420, 620], grilleU: 0.42, intakeY: [300, 400], intakeU: 0.6, ...o });
+const car = (o: Partial<FrontRear> = {}): FrontRear => ({
+  lampY: [620, 760], lampU: [0.5, 0.93], grilleY: [420, 620], grilleU: 0.42, intakeY: [300, 400], intakeU: 0.6, ...o,
+});
 const tail = (o: Partial<FrontRear> = {}): FrontRear => ({ lampY: [740, 900], lampU: [0.55, 0.95], ...o });
 
 export const BODIES: Record<BodyType, BodySpec> = {

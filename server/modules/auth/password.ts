@@ -4,7 +4,7 @@ import { dictionary } from "@zxcvbn-ts/language-common";
 // oslo's Argon2id defaults are OWASP's minimum: m=19456 KiB, t=2, p=1.
 const argon2id = new Argon2id();
 
-const common = new Set((dictionary["passwords-common"] as string[]).map((p) => p.toLowerCase()));
+const common = new Set(dictionary["passwords-common"].map((p) => p.toLowerCase()));
 
 export const hashPassword = (password: string) => argon2id.hash(password);
 export const verifyPassword = (hash: string, password: string) => argon2id.verify(hash, password);

@@ -1,7 +1,7 @@
 import type { checkResults, Dealership, tyreReadings } from "../../db/schema/index.ts";
 import { assessTyre } from "../../../shared/domain/tyre-assessment.ts";
 import { safetyCautions } from "../../../shared/domain/cautions.ts";
-import { CHECK_LABELS, TYRE_POSITION_LABELS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "../../../shared/constants/evidence.ts";
+import { CHECK_LABELS, TYRE_POSITION_LABELS, TYRE_POSITIONS, type TyrePosition } from "../../../shared/constants/evidence.ts";
 
 /** Tyres and checks with every computed figure and the cautions they call for. */
 export function presentChecks(
@@ -25,7 +25,9 @@ export function presentChecks(
     measuredOn: t.measuredOn,
     measuredBy: t.measuredBy,
   }));
-  const results = checks.map((c) => ({ item: c.item, label: CHECK_LABELS[c.item as CheckItem], result: c.result, note: c.note, checkedOn: c.checkedOn, checkedBy: c.checkedBy }));
+  const results = checks.map((c) => ({
+    item: c.item, label: CHECK_LABELS[c.item], result: c.result, note: c.note, checkedOn: c.checkedOn, checkedBy: c.checkedBy,
+  }));
   return {
     tyres: { version: v.tyresVersion, measuredOn: tyres[0]?.measuredOn ?? null, legalMinTreadMm: d.legalMinTreadMm, readings },
     checks: { version: v.checksVersion, results },

@@ -17,7 +17,7 @@ export function feedsPublicRoutes(ctx: AppContext): Router {
   router.get("/feeds/:file", async (req, res) => {
     const m = FILE.exec(req.params.file);
     if (!m) throw notFound("That feed");
-    const feed = await service.feedForToken(ctx, m[1]!, m[2]!);
+    const feed = await service.feedForToken(ctx, m[1], m[2]);
     const { since: sinceText } = parseOr400(feedQuerySchema, req.query, "query");
     const since = sinceText ? new Date(sinceText) : undefined;
     const log = (status: number, rows: number, bytes: number) =>

@@ -133,17 +133,17 @@ export async function recentFetches(db: DbOrTx, feedIds: number[], per = 20) {
   );
   const list = (rows as unknown as [Array<Record<string, unknown>>])[0];
   // drizzle reads DATETIME through mysql2 as text in UTC.
-  const date = (v: unknown) => (v == null ? null : v instanceof Date ? v : new Date(`${String(v).replace(" ", "T")}Z`));
+  const date = (v: string | Date | null) => (v == null ? null : v instanceof Date ? v : new Date(`${v.replace(" ", "T")}Z`));
   return list.map((r) => ({
     id: Number(r.id),
     feedId: Number(r.feed_id),
-    at: date(r.at)!,
+    at: date(r.at as string | Date)!,
     ip: (r.ip as string | null) ?? null,
     userAgent: (r.user_agent as string | null) ?? null,
     rows: Number(r.rows),
     bytes: Number(r.bytes),
     status: Number(r.status),
-    since: date(r.since),
+    since: date(r.since as string | Date | null),
   }));
 }
 

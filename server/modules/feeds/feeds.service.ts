@@ -11,7 +11,7 @@ import {
   DEFAULT_STATUSES, FORMATS_WITH_COLUMNS, effectiveColumns, type CreateFeedInput, type FeedColumn, type FeedFormat, type PreviewFeedInput, type UpdateFeedInput,
 } from "../../../shared/schemas/feeds.ts";
 import type { PublicSnapshot, PublicStatus } from "../../../shared/schemas/public.ts";
-import { ALL_COLUMNS, cellOf, dependsOnToday, unitsFor, type CellContext, type FeedRow } from "./columns.ts";
+import { ALL_COLUMNS, cellOf, dependsOnToday, unitsFor, type Cell, type CellContext, type FeedRow } from "./columns.ts";
 import { CONTENT_TYPES, writerFor, type FeedItem } from "./writers.ts";
 import { feedSelect, findFeed, findFeedByTokenHash, fingerprintSelect, listFeeds, logFetch, recentFetches, takeConnection } from "./feeds.queries.ts";
 import { presentFeed, type FeedPreview } from "./feeds.presenter.ts";
@@ -44,14 +44,15 @@ export async function get(ctx: AppContext, actor: User, id: number) {
 export async function create(ctx: AppContext, actor: User, input: CreateFeedInput) {
   const { token, tokenHash, tokenHint } = newFeedToken();
   const values = {
-    dealershipId: actor.dealershipId, name: input.name, format: input.format, filter: normaliseFilter(input.filter), columns: columnsFor(input.format, input.columns),
+    dealershipId: actor.dealershipId, name: input.name, format: input.format, filter: normaliseFilter(input.filter),
+    columns: columnsFor(input.format, input.columns),
     units: input.units ?? ("market" as const), tokenHash, tokenHint, createdBy: actor.id,
   };
   return ctx.database.db.transaction(async (tx) => {
     const [result] = await tx.insert(feeds).values(values);
     const id = result.insertId;
     await recordAudit(tx, actorOf(actor), { action: "feed_created", entityType: "feed", entityId: id, after: auditView(values) });
-    const f = (await findFeed(tx, actor.dealershipId, id))!;
+    const f = await findFeed(tx, actor.dealershipId, id);
     const url = feedUrl(ctx, token, f.format);
     return { feed: { ...presentFeed(f, ctx.config.publicUrl, ctx.now()), url }, url };
   });
@@ -70,7 +71,7 @@ export async function update(ctx: AppContext, actor: User, id: number, input: Up
     await tx.update(feeds).set({ ...set, version: current.version + 1 }).where(eq(feeds.id, id));
     const diff = diffFields(auditView(current), set);
     await recordAudit(tx, actorOf(actor), { action: "feed_updated", entityType: "feed", entityId: id, before: diff?.before ?? null, after: diff?.after ?? null });
-    return presentFeed((await findFeed(tx, actor.dealershipId, id))!, ctx.config.publicUrl, ctx.now());
+    return presentFeed(await findFeed(tx, actor.dealershipId, id), ctx.config.publicUrl, ctx.now());
   });
 }
 
@@ -82,7 +83,7 @@ export async function rotate(ctx: AppContext, actor: User, id: number) {
     const { token, tokenHash, tokenHint } = newFeedToken();
     await tx.update(feeds).set({ tokenHash, tokenHint, version: current.version + 1 }).where(eq(feeds.id, id));
     await recordAudit(tx, actorOf(actor), { action: "feed_token_rotated", entityType: "feed", entityId: id, before: { tokenHint: current.tokenHint }, after: { tokenHint } });
-    const f = (await findFeed(tx, actor.dealershipId, id))!;
+    const f = await findFeed(tx, actor.dealershipId, id);
     const url = feedUrl(ctx, token, f.format);
     return { feed: { ...presentFeed(f, ctx.config.publicUrl, ctx.now()), url }, url };
   });
@@ -221,9 +222,12 @@ export async function openFeedStream(ctx: AppContext, spec: FeedSpec, since?: Da
   return { body: counter, contentType: CONTENT_TYPES[spec.format], counts: () => ({ rows, bytes }) };
 }
 
-export async function recordFetch(ctx: AppContext, feedId: number, entry: { ip: string | null; userAgent: string | null; rows: number; bytes: number; status: number; since?: Date }) {
+type FetchEntry = { ip: string | null; userAgent: string | null; rows: number; bytes: number; status: number; since?: Date };
+
+export async function recordFetch(ctx: AppContext, feedId: number, entry: FetchEntry) {
   await logFetch(ctx.database.db, {
-    feedId, at: ctx.now(), ip: entry.ip?.slice(0, 64) ?? null, userAgent: entry.userAgent?.slice(0, 300) ?? null, rows: entry.rows, bytes: entry.bytes, status: entry.status, since: entry.since ?? null,
+    feedId, at: ctx.now(), ip: entry.ip?.slice(0, 64) ?? null, userAgent: entry.userAgent?.slice(0, 300) ?? null,
+    rows: entry.rows, bytes: entry.bytes, status: entry.status, since: entry.since ?? null,
   });
 }
 
@@ -240,7 +244,7 @@ export async function preview(ctx: AppContext, actor: User, input: PreviewFeedIn
   const [[result], fp] = await Promise.all([ctx.database.pool.query({ sql: q.sql, values: q.params, rowsAsArray: true }), validators(ctx, spec)]);
   const items = (result as unknown[][]).map(rowToItem);
   const tableColumns = FORMATS_WITH_COLUMNS.includes(spec.format) ? effectiveColumns(spec.columns) : effectiveColumns(null);
-  const text = (v: unknown) => (v == null ? "" : Array.isArray(v) ? v.join(" | ") : String(v));
+  const text = (v: Cell) => (v == null ? "" : Array.isArray(v) ? v.join(" | ") : String(v));
   const rows = items.flatMap((i) => (i.kind === "row" ? [tableColumns.map((c) => text(cellOf(i.row, cells, c)))] : []));
   const sample = await collect(writerFor({ format: spec.format, columns: columnsOf(spec), cells, name: spec.name }), items.slice(0, 3));
   return { columns: tableColumns.map((c) => ({ key: c.key, header: c.header })), rows, total: fp.count, sample };
@@ -252,7 +256,7 @@ function collect(stages: Transform[], items: FeedItem[]): Promise<string> {
     const sink = new PassThrough();
     sink.on("data", (c: Buffer) => chunks.push(Buffer.from(c)));
     pipeline([...stages, sink], (err) => (err ? reject(err) : resolve(Buffer.concat(chunks).toString("utf8"))));
-    const first = stages[0]!;
+    const first = stages[0];
     for (const i of items) first.write(i);
     first.end();
   });

@@ -81,7 +81,8 @@ class JsonWriter extends TextWriter {
   protected item(item: FeedItem) {
     let value: Record<string, unknown>;
     if (item.kind === "removed") {
-      value = { stockNumber: item.row.stockNumber, url: pageUrl(this.o.cells.publicUrl, item.row.slug), removed: true, removedAt: item.row.removedAt.toISOString() };
+      const { stockNumber, slug, removedAt } = item.row;
+      value = { stockNumber, url: pageUrl(this.o.cells.publicUrl, slug), removed: true, removedAt: removedAt.toISOString() };
     } else {
       value = {};
       for (const col of ALL_COLUMNS) value[col.key] = cellOf(item.row, this.o.cells, col);

@@ -53,7 +53,10 @@ export type LeadDetail = ReturnType<typeof presentLeadDetail>;
 export type ConversationItem = LeadDetail["conversation"][number];
 
 /** GET /api/leads/stats: enquiries per vehicle and per source, never the buyers' details. */
-export function presentLeadCounts(perVehicle: Array<{ vehicleId: number; stockNumber: string; title: string | null; n: number | string }>, perSource: Array<{ source: string; n: number | string }>) {
+export function presentLeadCounts(
+  perVehicle: Array<{ vehicleId: number; stockNumber: string; title: string | null; n: number | string }>,
+  perSource: Array<{ source: string; n: number | string }>,
+) {
   return { perVehicle: perVehicle.map((r) => ({ ...r, n: Number(r.n) })), perSource: perSource.map((r) => ({ ...r, n: Number(r.n) })) };
 }
 export type LeadCounts = ReturnType<typeof presentLeadCounts>;

@@ -31,7 +31,7 @@ export async function submitEnquiry(ctx: AppContext, slug: string, input: Enquir
   await consume(ctx.limiters.enquiryPerVehicle, String(v.id), "enquiries about this vehicle just now");
   const d = await getDealership(db, v.dealershipId);
   const [rev] = await db.select({ number: revisions.number, title: revisions.title }).from(revisions).where(eq(revisions.id, v.currentRevisionId));
-  const revisionNumber = input.revision && input.revision <= v.lastRevisionNumber ? input.revision : rev!.number;
+  const revisionNumber = input.revision && input.revision <= v.lastRevisionNumber ? input.revision : rev.number;
   const url = `${ctx.config.publicUrl}/vehicles/${slug}`;
   const [assignee] = v.salespersonId ? await db.select().from(users).where(and(eq(users.id, v.salespersonId), eq(users.active, true))) : [];
   const staffAddress = assignee?.email ?? d.email;
@@ -43,7 +43,7 @@ export async function submitEnquiry(ctx: AppContext, slug: string, input: Enquir
     });
     await tx.insert(leadNotes).values({ leadId: res.insertId, kind: "enquiry", body: input.message, userName: input.name });
     const data: EnquiryMailData = {
-      vehicleTitle: rev!.title, stockNumber: v.stockNumber, url, name: input.name, email: input.email, phone: input.phone, message: input.message,
+      vehicleTitle: rev.title, stockNumber: v.stockNumber, url, name: input.name, email: input.email, phone: input.phone, message: input.message,
       preferredContact: CONTACT_LABELS[input.preferredContact], leadUrl: `${ctx.config.publicUrl}/app/leads/${res.insertId}`,
       tradeIn: tradeIn ? [tradeIn.year, tradeIn.make, tradeIn.model, tradeIn.odometerKm ? `${tradeIn.odometerKm} km` : null].filter(Boolean).join(" ") : null,
     };
@@ -84,7 +84,9 @@ export async function getLead(ctx: AppContext, actor: User, id: number): Promise
   if (!r) throw notFound("That lead");
   const notes = await db.select().from(leadNotes).where(eq(leadNotes.leadId, id)).orderBy(asc(leadNotes.at), asc(leadNotes.id));
   const mailIds = notes.map((n) => n.outboxId).filter((x): x is number => x != null);
-  const mails = mailIds.length ? await db.select({ id: outbox.id, status: outbox.status, sentAt: outbox.sentAt }).from(outbox).where(inArray(outbox.id, mailIds)) : [];
+  const mails = mailIds.length
+    ? await db.select({ id: outbox.id, status: outbox.status, sentAt: outbox.sentAt }).from(outbox).where(inArray(outbox.id, mailIds))
+    : [];
   return presentLeadDetail(presentLeadRow(r, ctx.now()), notes, mails);
 }
 
@@ -150,7 +152,7 @@ export async function shareVehicle(ctx: AppContext, actor: User, vehicleId: numb
   const d = await getDealership(db, actor.dealershipId);
   const [rev] = await db.select({ title: revisions.title }).from(revisions).where(eq(revisions.id, v.currentRevisionId!));
   await db.transaction(async (tx) => {
-    await enqueueMail(tx, { to: input.email, kind: "share", ...shareMail(d, { toName: input.name, fromName: actor.name, vehicleTitle: rev!.title, url: `${ctx.config.publicUrl}/vehicles/${v.publicSlug}`, message: input.message }) }, ctx.now());
+    await enqueueMail(tx, { to: input.email, kind: "share", ...shareMail(d, { toName: input.name, fromName: actor.name, vehicleTitle: rev.title, url: `${ctx.config.publicUrl}/vehicles/${v.publicSlug}`, message: input.message }) }, ctx.now());
     await recordAudit(tx, actorOf(actor), { action: "shared_by_mail", entityType: "vehicle", entityId: vehicleId, after: { to: input.email } });
   });
   ctx.mail.kick();

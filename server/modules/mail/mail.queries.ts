@@ -7,7 +7,10 @@ const SHOWN = 100;
 
 export const recentOutbox = (db: DbOrTx) =>
   db
-    .select({ id: outbox.id, to: outbox.toAddress, subject: outbox.subject, kind: outbox.kind, status: outbox.status, attempts: outbox.attempts, lastError: outbox.lastError, createdAt: outbox.createdAt, sentAt: outbox.sentAt })
+    .select({
+      id: outbox.id, to: outbox.toAddress, subject: outbox.subject, kind: outbox.kind, status: outbox.status, attempts: outbox.attempts,
+      lastError: outbox.lastError, createdAt: outbox.createdAt, sentAt: outbox.sentAt,
+    })
     .from(outbox)
     .orderBy(desc(outbox.id))
     .limit(SHOWN);

@@ -15,7 +15,9 @@ export interface Mail {
 
 /** Queues a mail inside the caller's transaction; it goes out only if the transaction commits. */
 export async function enqueueMail(db: DbOrTx, mail: Mail, now = new Date()): Promise<number> {
-  const [res] = await db.insert(outbox).values({ toAddress: mail.to, subject: mail.subject.slice(0, 300), text: mail.text, html: mail.html, kind: mail.kind, nextAttemptAt: now });
+  const [res] = await db.insert(outbox).values({
+    toAddress: mail.to, subject: mail.subject.slice(0, 300), text: mail.text, html: mail.html, kind: mail.kind, nextAttemptAt: now,
+  });
   return res.insertId;
 }
 
@@ -104,7 +106,7 @@ export class MailSender extends BackgroundLoop {
       } catch (err) {
         const attempts = row.attempts + 1;
         const gaveUp = now.getTime() - row.createdAt.getTime() > GIVE_UP_AFTER;
-        const wait = BACKOFF_MS[Math.min(attempts - 1, BACKOFF_MS.length - 1)]!;
+        const wait = BACKOFF_MS[Math.min(attempts - 1, BACKOFF_MS.length - 1)];
         await tx
           .update(outbox)
           .set({ attempts, status: gaveUp ? "failed" : "pending", nextAttemptAt: new Date(now.getTime() + wait), lastError: String((err as Error).message).slice(0, 500) })

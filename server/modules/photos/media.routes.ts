@@ -17,7 +17,7 @@ export function mediaRoutes(ctx: AppContext): Router {
       res.status(404).type("text/plain").send("Not found");
       return;
     }
-    res.setHeader("Content-Type", TYPES[key.split(".").pop()!]!);
+    res.setHeader("Content-Type", TYPES[key.split(".").pop()!]);
     res.setHeader("X-Content-Type-Options", "nosniff");
     res.setHeader("Cache-Control", "public, max-age=31536000, immutable");
     res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");

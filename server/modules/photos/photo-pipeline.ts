@@ -87,7 +87,7 @@ async function prepareMasterNow(input: Buffer): Promise<Master> {
 /** Every served width in AVIF, WebP and JPEG. Slow (AVIF), so it runs off the request path. */
 export async function makeVariants(storage: Storage, hash: string, master: Buffer, masterWidth: number): Promise<PhotoVariant[]> {
   // The standard widths below the master's, plus the master's own width when it is under the largest.
-  const largest = PHOTO_WIDTHS[PHOTO_WIDTHS.length - 1]!;
+  const largest = PHOTO_WIDTHS[PHOTO_WIDTHS.length - 1];
   const widths: number[] = PHOTO_WIDTHS.filter((w) => w < masterWidth);
   if (masterWidth < largest || !widths.includes(largest)) widths.push(Math.min(masterWidth, largest));
   const out: PhotoVariant[] = [];
@@ -114,7 +114,11 @@ export async function makeCloseup(storage: Storage, master: Buffer, width: numbe
   const side = Math.max(64, Math.round(Math.min(width, height) * 0.3));
   const left = Math.min(Math.max(0, Math.round(x * width - side / 2)), width - side);
   const top = Math.min(Math.max(0, Math.round(y * height - side / 2)), height - side);
-  const data = await sharp(master).extract({ left, top, width: side, height: side }).resize({ width: 480, withoutEnlargement: true }).webp({ quality: 80 }).toBuffer();
+  const data = await sharp(master)
+    .extract({ left, top, width: side, height: side })
+    .resize({ width: 480, withoutEnlargement: true })
+    .webp({ quality: 80 })
+    .toBuffer();
   const hash = createHash("sha256").update(data).digest("hex");
   const key = `closeups/${shard(hash)}/${hash}.webp`;
   await storage.put(key, data);

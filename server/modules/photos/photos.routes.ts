@@ -24,7 +24,7 @@ export function photosRoutes(ctx: AppContext): Router {
       if (!files.length) throw badRequest("Choose at least one photo.", { photos: "Send one or more files in the field named “photos”." });
       const { accepted, refused } = await service.upload(ctx, user, params.id, files);
       if (!accepted.length) {
-        const first = refused[0]!;
+        const first = refused[0];
         throw new AppError(first.status, first.code, refused.length === 1 ? first.reason : "None of the files could be used.", undefined, { refused });
       }
       return { photos: accepted, refused };

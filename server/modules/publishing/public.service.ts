@@ -155,7 +155,7 @@ async function readPublic(ctx: AppContext, slug: string, v: Located, number?: nu
   const wanted = number === undefined ? all.find((r) => r.id === v.currentRevisionId) : all.find((r) => r.number === number);
   if (!wanted) throw notFound("That revision");
   const [full] = await db.select().from(revisions).where(eq(revisions.id, wanted.id));
-  return { slug, url: urlFor(ctx, slug), status: v.status, revision: summary(full!), snapshot: full!.snapshot, revisions: all.map(summary) };
+  return { slug, url: urlFor(ctx, slug), status: v.status, revision: summary(full), snapshot: full.snapshot, revisions: all.map(summary) };
 }
 
 /** A vehicle by its public address: the newest revision, or a given older one. Never the working record. */
@@ -175,7 +175,13 @@ export function publicCacheOf(ctx: AppContext): PublicCache {
  * A public response made from the vehicle's revisions, cached by what it depends on: revisions never change, so
  * (vehicle, revision asked for, current revision, status) fixes the bytes; the slug → those lookup runs every time.
  */
-export async function publicRepresentation(ctx: AppContext, kind: string, slug: string, number: number | undefined, render: (v: PublicVehicle) => Promise<Representation>): Promise<Representation> {
+export async function publicRepresentation(
+  ctx: AppContext,
+  kind: string,
+  slug: string,
+  number: number | undefined,
+  render: (v: PublicVehicle) => Promise<Representation>,
+): Promise<Representation> {
   const v = await locate(ctx, slug);
   const key = `${kind}|${slug}|${v.id}|${number ?? "current"}|${v.currentRevisionId}|${v.status}`;
   return publicCacheOf(ctx).get(key, async () => {

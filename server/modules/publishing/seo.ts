@@ -1,5 +1,5 @@
 import type { PublicSnapshot, PublicStatus } from "../../../shared/schemas/public.ts";
-import { DEFECT_KIND_LABELS, SEVERITY_LABELS, ZONE_LABELS, type DefectKind, type Severity, type Zone } from "../../../shared/constants/evidence.ts";
+import { DEFECT_KIND_LABELS, SEVERITY_LABELS, ZONE_LABELS, type DefectKind, type Zone } from "../../../shared/constants/evidence.ts";
 import { LABELS } from "../../../shared/constants/vehicle.ts";
 import { formatDistance, formatMoney } from "../../../shared/domain/display.ts";
 
@@ -25,7 +25,7 @@ const absolute = (base: string, path: string) => (path.startsWith("http") ? path
  * LTR, KWT, CMQ, NU), unitText where it has none (L/100 km).
  */
 export function carJsonLd(s: PublicSnapshot, status: PublicStatus, url: string, base: string) {
-  const damages = s.defects.map((d) => `${d.number}. ${SEVERITY_LABELS[d.severity as Severity]} ${DEFECT_KIND_LABELS[d.kind as DefectKind].toLowerCase()}, ${ZONE_LABELS[d.zone as Zone].toLowerCase()}${d.sizeMm ? `, ${d.sizeMm} mm` : ""}${d.repairPlan === "repaired_before_sale" ? " (repaired before sale)" : ""}`);
+  const damages = s.defects.map((d) => `${d.number}. ${SEVERITY_LABELS[d.severity]} ${DEFECT_KIND_LABELS[d.kind as DefectKind].toLowerCase()}, ${ZONE_LABELS[d.zone as Zone].toLowerCase()}${d.sizeMm ? `, ${d.sizeMm} mm` : ""}${d.repairPlan === "repaired_before_sale" ? " (repaired before sale)" : ""}`);
   const data: Record<string, unknown> = {
     "@context": "https://schema.org",
     "@type": "Car",

@@ -8,7 +8,7 @@ import type { Evidence } from "../condition/condition.presenter.ts";
 /** Media keys behind the /media/ URLs a snapshot shows, so the clean-up keeps their files. */
 export function mediaKeysOf(snapshot: PublicSnapshot): string[] {
   const urls = [
-    ...snapshot.photos.flatMap((p) => [p.src, ...[p.srcsetAvif, p.srcsetWebp, p.srcsetJpeg].flatMap((s) => (s ? s.split(", ").map((x) => x.split(" ")[0]!) : []))]),
+    ...snapshot.photos.flatMap((p) => [p.src, ...[p.srcsetAvif, p.srcsetWebp, p.srcsetJpeg].flatMap((s) => (s ? s.split(", ").map((x) => x.split(" ")[0]) : []))]),
     ...snapshot.defects.flatMap((d) => (d.closeup ? [d.closeup] : [])),
   ];
   return [...new Set(urls.filter((u) => u.startsWith("/media/")).map((u) => u.slice("/media/".length)))];
@@ -26,7 +26,8 @@ export function buildSnapshot(v: Vehicle, derived: Derived, evidence: Evidence, 
   const tyreDates = evidence.tyres.readings.map((r) => r.measuredOn);
   const checkDates = evidence.checks.results.map((c) => c.checkedOn);
   const zoneDates = evidence.zones.map((z) => z.checkedAt?.slice(0, 10));
-  const inspector = evidence.tyres.readings[0]?.measuredBy ?? evidence.checks.results[0]?.checkedBy ?? evidence.zones.find((z) => z.checkedBy)?.checkedBy ?? null;
+  const inspector =
+    evidence.tyres.readings[0]?.measuredBy ?? evidence.checks.results[0]?.checkedBy ?? evidence.zones.find((z) => z.checkedBy)?.checkedBy ?? null;
   return {
     title: [v.buildYear, v.make, v.model].filter(Boolean).join(" "),
     stockNumber: v.stockNumber,
@@ -69,7 +70,8 @@ export function buildSnapshot(v: Vehicle, derived: Derived, evidence: Evidence, 
       placeholder: p.placeholder, caption: p.caption, zone: p.zone, isCover: p.isCover,
     })),
     defects: evidence.defects.map((x) => ({
-      number: x.number, zone: x.zone, kind: x.kind, severity: x.severity, sizeMm: x.sizeMm, note: x.note, repairPlan: x.repairPlan, safetyRelevant: x.safetyRelevant,
+      number: x.number, zone: x.zone, kind: x.kind, severity: x.severity, sizeMm: x.sizeMm, note: x.note,
+      repairPlan: x.repairPlan, safetyRelevant: x.safetyRelevant,
       pin: x.pin && indexOf.has(x.pin.photoId) ? { photoIndex: indexOf.get(x.pin.photoId)!, x: x.pin.x, y: x.pin.y } : null,
       closeup: x.closeup,
     })),

@@ -34,7 +34,7 @@ export async function create(ctx: AppContext, actor: User, input: CreateUserInpu
       entityId: id,
       after: { email: input.email, name: input.name, role: input.role },
     });
-    return presentUser((await findUser(tx, actor.dealershipId, id))!);
+    return presentUser(await findUser(tx, actor.dealershipId, id));
   });
 }
 
@@ -66,7 +66,7 @@ export async function update(ctx: AppContext, actor: User, id: string, input: Up
       before: diff?.before ?? null,
       after: { ...(diff?.after ?? {}), ...(passwordHash ? { password: "changed" } : {}) },
     });
-    const updated = (await findUser(tx, actor.dealershipId, id))!;
+    const updated = await findUser(tx, actor.dealershipId, id);
     return { updated, revoke: input.active === false || Boolean(passwordHash) };
   });
   // Deactivation or a new password ends the user's sessions at once. A role change needs no revocation:

@@ -41,5 +41,8 @@ export function zoneStates(defectRows: Pick<Defect, "zone">[], marks: Array<{ zo
 export type ZoneState = ReturnType<typeof zoneStates>[number];
 
 /** GET /api/vehicles/:id/walkaround: the defects and the state of every zone. */
-export const presentWalkaround = (rows: Defect[], marks: Parameters<typeof zoneStates>[1]) => ({ defects: rows.map(presentDefect), zones: zoneStates(rows, marks) });
+export const presentWalkaround = (rows: Defect[], marks: Parameters<typeof zoneStates>[1]) => ({
+  defects: rows.map(presentDefect),
+  zones: zoneStates(rows, marks),
+});
 export type WalkaroundView = ReturnType<typeof presentWalkaround>;

@@ -46,7 +46,7 @@ export async function createDefect(ctx: AppContext, actor: User, vehicleId: numb
     await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, input.zone)));
     await recordAudit(tx, actorOf(actor), { action: "defect_added", entityType: "vehicle", entityId: vehicleId, after: { number, ...fields, pinned: Boolean(input.pin) } });
     const [row] = await tx.select().from(defects).where(eq(defects.id, res.insertId));
-    return presentDefect(row!);
+    return presentDefect(row);
   });
 }
 
@@ -60,10 +60,10 @@ export async function updateDefect(ctx: AppContext, actor: User, vehicleId: numb
     const pinCols = await pinColumns(ctx, tx, vehicleId, pin);
     await tx.update(defects).set({ ...fields, ...pinCols, version: version + 1 }).where(eq(defects.id, defectId));
     if (fields.zone) await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, fields.zone)));
-    const diff = diffFields(current as unknown as Record<string, unknown>, { ...fields, ...pinCols } as Record<string, unknown>);
+    const diff = diffFields(current as unknown as Record<string, unknown>, { ...fields, ...pinCols });
     if (diff) await recordAudit(tx, actorOf(actor), { action: "defect_updated", entityType: "vehicle", entityId: vehicleId, before: { number: current.number, ...diff.before }, after: { number: current.number, ...diff.after } });
     const [row] = await tx.select().from(defects).where(eq(defects.id, defectId));
-    return presentDefect(row!);
+    return presentDefect(row);
   });
 }
 
