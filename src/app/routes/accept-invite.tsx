@@ -52,7 +52,7 @@ export default function AcceptInvite() {
         busy={accept.isPending}
         error={error}
         serverError={error && !Object.keys(fields).length ? error.message : undefined}
-        onSubmit={(password) => accept.mutate({ token, password }, { onSuccess: () => navigate("/app", { replace: true }) })}
+        onSubmit={(password) => accept.mutate({ token, password }, { onSuccess: () => void navigate("/app", { replace: true }) })}
       />
     </PublicFrame>
   );

@@ -2,7 +2,7 @@ import { Link } from "react-router";
 import { useRequestReset } from "../../features/accounts/api/accounts.ts";
 import { PublicFrame } from "../../features/accounts/PublicFrame.tsx";
 import { TextField } from "../../components/form/Field.tsx";
-import { setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { resetRequestSchema } from "../../../shared/schemas/enquiries.ts";
@@ -29,7 +29,7 @@ export default function ForgotPassword() {
 
   return (
     <PublicFrame title="Forgotten your password?" lead="Give the e-mail address you sign in with. We send a link to choose a new password.">
-      <form onSubmit={submit} noValidate className="flex flex-col gap-5">
+      <form onSubmit={onSubmitOf(submit)} noValidate className="flex flex-col gap-5">
         {error && !fieldError ? (
           <Notice tone={error.status === 429 ? "caution" : "danger"} title={error.status === 429 ? "Too many requests just now" : "Not sent"}>
             {error.message}

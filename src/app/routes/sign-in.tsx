@@ -2,7 +2,7 @@ import { Link, Navigate, useNavigate, useSearchParams } from "react-router";
 import { useSession, useSignIn } from "../../lib/auth.ts";
 import { isApiError } from "../../lib/api-client.ts";
 import { TextField } from "../../components/form/Field.tsx";
-import { setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { Wordmark } from "../../components/ui/Page.tsx";
@@ -26,7 +26,7 @@ export default function SignIn() {
   const fields = isApiError(error) ? error.fields : {};
 
   const submit = form.handleSubmit((values) =>
-    signIn.mutate(values, { onSuccess: () => navigate(next, { replace: true }), onError: (e) => setServerErrors(form, e) }),
+    signIn.mutate(values, { onSuccess: () => void navigate(next, { replace: true }), onError: (e) => setServerErrors(form, e) }),
   );
 
   return (
@@ -34,7 +34,7 @@ export default function SignIn() {
       <Wordmark className="text-2xl" />
       <h1 className="mt-8 text-3xl font-bold">Staff sign-in</h1>
       <p className="mt-2 text-ink-soft">For the dealership's team. Buyers don't need an account.</p>
-      <form onSubmit={submit} noValidate className="mt-8 flex flex-col gap-5" aria-describedby={error ? "sign-in-error" : undefined}>
+      <form onSubmit={onSubmitOf(submit)} noValidate className="mt-8 flex flex-col gap-5" aria-describedby={error ? "sign-in-error" : undefined}>
         {error && !Object.keys(fields).length ? (
           <div id="sign-in-error">
             <Notice tone="danger" title={error.message} />

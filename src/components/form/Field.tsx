@@ -72,7 +72,11 @@ export function TextAreaField({ label, error, hint, className = "", ...rest }: F
   );
 }
 
-export function CheckboxField({ label, error, ...rest }: { label: ReactNode; error?: string } & InputHTMLAttributes<HTMLInputElement> & WithRef<HTMLInputElement>) {
+export function CheckboxField({
+  label,
+  error,
+  ...rest
+}: { label: ReactNode; error?: string } & InputHTMLAttributes<HTMLInputElement> & WithRef<HTMLInputElement>) {
   const auto = useId();
   const id = rest.id ?? auto;
   return (

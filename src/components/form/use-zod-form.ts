@@ -1,5 +1,6 @@
 import { useForm, type FieldValues, type Path, type Resolver, type UseFormProps, type UseFormReturn } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
+import type { BaseSyntheticEvent } from "react";
 import type { z } from "zod";
 import { isApiError } from "../../lib/api-client.ts";
 
@@ -30,9 +31,15 @@ export function useZodFormAsTyped<V extends FieldValues, S extends z.ZodType>(
   options: Omit<UseFormProps<V, unknown, z.output<S>>, "resolver"> = {},
 ): UseFormReturn<V, unknown, z.output<S>> {
   const check = zodResolver(schema as never);
-  const resolver: Resolver<V, unknown, z.output<S>> = (values, context, opts) => check(toInput(values) as never, context, opts as never) as never;
+  const resolver: Resolver<V, unknown, z.output<S>> = (values, context, opts) => check(toInput(values) as never, context, opts as never);
   return useForm<V, unknown, z.output<S>>({ resolver, mode: "onSubmit", reValidateMode: "onSubmit", shouldFocusError: false, ...options });
 }
+
+/** handleSubmit's handler for `onSubmit`, which wants no promise back. */
+export const onSubmitOf =
+  (handler: (e?: BaseSyntheticEvent) => Promise<void>) =>
+  (e: BaseSyntheticEvent): void =>
+    void handler(e);
 
 /** The server's `fields` (the same `zodFields` shape) onto the inputs they name; what was typed stays. */
 export function setServerErrors<V extends FieldValues>(form: Pick<UseFormReturn<V, unknown, never>, "setError">, error: unknown): void {
@@ -56,7 +63,7 @@ export function flatErrors(errors: object, prefix = ""): Record<string, string> 
     const path = prefix ? `${prefix}.${key}` : key;
     const message = (node as { message?: unknown }).message;
     if (typeof message === "string") out[path] = message;
-    else Object.assign(out, flatErrors(node, path));
+    else Object.assign(out, flatErrors(node as object, path));
   }
   return out;
 }

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { useInvite } from "./api/accounts.ts";
 import { isApiError } from "../../lib/api-client.ts";
 import { SelectField, TextField } from "../../components/form/Field.tsx";
-import { setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { ROLES, ROLE_LABELS, type Role } from "../../../shared/constants/roles.ts";
@@ -20,7 +20,7 @@ export function InviteForm() {
   const fields = isApiError(error) ? error.fields : {};
   // Typing again means the last "sent" is no longer news.
   const field = (key: keyof typeof blank) => form.register(key, { onChange: () => setSent(null) });
-  const role = form.watch("role") as Role;
+  const role = form.watch("role");
 
   const submit = form.handleSubmit((values) =>
     invite.mutate(values, {
@@ -33,7 +33,7 @@ export function InviteForm() {
   );
 
   return (
-    <form onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="Invite a staff member">
+    <form onSubmit={onSubmitOf(submit)} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="Invite a staff member">
       {sent ? (
         <div className="sm:col-span-2">
           <Notice tone="success" title="Invitation sent">

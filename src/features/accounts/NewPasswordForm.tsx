@@ -1,7 +1,7 @@
 import { useEffect, type ReactNode } from "react";
 import { z } from "zod";
 import { TextField } from "../../components/form/Field.tsx";
-import { setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { tokenPasswordSchema } from "../../../shared/schemas/enquiries.ts";
@@ -50,7 +50,7 @@ export function NewPasswordForm({
   const submit = form.handleSubmit(({ password }) => onSubmit(password));
 
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-5">
+    <form onSubmit={onSubmitOf(submit)} noValidate className="flex flex-col gap-5">
       {serverError ? <Notice tone="danger" title={serverError} /> : null}
       {username ? <input type="text" name="username" autoComplete="username" value={username} readOnly hidden /> : null}
       <TextField

@@ -1,5 +1,5 @@
 import { useEffect, useId, useRef, useState } from "react";
-import { useForm, type FieldErrors, type Resolver } from "react-hook-form";
+import { useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useSubmitEnquiry } from "./api.ts";
 import { isApiError } from "../../lib/api-client.ts";
@@ -22,6 +22,11 @@ const blank = {
   tradeIn: { make: "", model: "", year: "", odometerKm: "" },
   consent: false,
   website: "",
+  // Not inputs, but what the body needs beside them: the trade-in part open or closed, when the form was shown
+  // (the server refuses answers faster than a person types) and the revision being read.
+  tradeInOpen: false,
+  startedAt: 0,
+  revision: 0,
 };
 type Values = typeof blank;
 
@@ -34,11 +39,11 @@ const wholeNumber = (s: string) => {
 };
 
 /** Values as typed (strings) → the request body, with the checks a number field needs before zod sees it. */
-function toBody(v: Values, startedAt: number, revision: number, tradeInOpen: boolean) {
+function toBody(v: Values) {
   const pre: Record<string, string> = {};
   let tradeIn = null as null | { make: string; model: string; year: number | null; odometerKm: number | null };
   const t = v.tradeIn;
-  if (tradeInOpen && (t.make.trim() || t.model.trim() || t.year.trim() || t.odometerKm.trim())) {
+  if (v.tradeInOpen && (t.make.trim() || t.model.trim() || t.year.trim() || t.odometerKm.trim())) {
     const year = t.year.trim() ? wholeNumber(t.year) : null;
     const km = t.odometerKm.trim() ? wholeNumber(t.odometerKm) : null;
     if (t.year.trim() && year === null) pre["tradeIn.year"] = "Write the year in figures, like 2014.";
@@ -55,8 +60,8 @@ function toBody(v: Values, startedAt: number, revision: number, tradeInOpen: boo
     tradeIn,
     consent: v.consent,
     website: v.website,
-    startedAt,
-    revision,
+    startedAt: v.startedAt || Date.now(),
+    revision: v.revision,
   };
   return { body, pre };
 }
@@ -73,19 +78,17 @@ const check = zodResolver(enquirySchema);
  * The schema's check of the body, with the number checks made before it (they win over zod's wording). The paths
  * of both name the inputs: `tradeIn.year` is the year's input.
  */
-const enquiryResolver =
-  (context: { startedAt: () => number; revision: number; tradeInOpen: () => boolean }): Resolver<Values, unknown, EnquiryInput> =>
-  async (values, ctx, options) => {
-    const { body, pre } = toBody(values, context.startedAt(), context.revision, context.tradeInOpen());
-    const result = await check(body as never, ctx, options as never);
-    if (!Object.keys(pre).length) return result as never;
-    const errors: FieldErrors<Values> = { ...result.errors } as never;
-    for (const [path, message] of Object.entries(pre)) {
-      const [head, leaf] = path.split(".") as ["tradeIn", keyof Values["tradeIn"]];
-      errors[head] = { ...(errors[head] ?? {}), [leaf]: { type: "custom", message } } as never;
-    }
-    return { values: {}, errors };
-  };
+const enquiryResolver: Resolver<Values, unknown, EnquiryInput> = async (values, ctx, options) => {
+  const { body, pre } = toBody(values);
+  const result = await check(body as never, ctx, options as never);
+  if (!Object.keys(pre).length) return result;
+  const errors: FieldErrors<Values> = { ...result.errors };
+  for (const [path, message] of Object.entries(pre)) {
+    const [head, leaf] = path.split(".") as ["tradeIn", keyof Values["tradeIn"]];
+    errors[head] = { ...(errors[head] ?? {}), [leaf]: { type: "custom", message } };
+  }
+  return { values: {}, errors };
+};
 
 /**
  * The buyer's question about one vehicle, phone first. Every problem is shown at once, before and after sending;
@@ -94,27 +97,24 @@ const enquiryResolver =
 export default function EnquiryFormBody({ slug, revision, vehicleTitle, stockNumber, dealership }: EnquiryFormProps) {
   const uid = useId();
   const submit = useSubmitEnquiry(slug);
-  const [tradeInOpen, setTradeInOpen] = useState(false);
   const [sentNext, setSentNext] = useState<string | null>(null);
-  const startedAt = useRef(0);
-  const tradeInOpenNow = useRef(tradeInOpen);
-  tradeInOpenNow.current = tradeInOpen;
   const form = useForm<Values, unknown, EnquiryInput>({
-    defaultValues: blank,
-    resolver: enquiryResolver({ startedAt: () => startedAt.current || Date.now(), revision, tradeInOpen: () => tradeInOpenNow.current }),
+    defaultValues: { ...blank, revision },
+    resolver: enquiryResolver,
     // Checked on send only; the buyer's corrections clear their own field (below).
     mode: "onSubmit",
     reValidateMode: "onSubmit",
     shouldFocusError: false,
   });
+  const tradeInOpen = useWatch({ control: form.control, name: "tradeInOpen" });
   const formRef = useRef<HTMLFormElement>(null);
   const thanksRef = useRef<HTMLDivElement>(null);
   const [focusTick, setFocusTick] = useState(0);
 
   // When the form is shown: the server refuses answers faster than a person types.
   useEffect(() => {
-    startedAt.current = Date.now();
-  }, []);
+    form.setValue("startedAt", Date.now());
+  }, [form]);
 
   // After a failed send, put the keyboard on the first field that needs attention.
   useEffect(() => {
@@ -154,11 +154,9 @@ export default function EnquiryFormBody({ slug, revision, vehicleTitle, stockNum
   function another() {
     // Keep who they are; a new question starts empty and needs the buyer's consent again.
     const v = form.getValues();
-    form.reset({ ...blank, name: v.name, email: v.email, phone: v.phone, preferredContact: v.preferredContact });
-    setTradeInOpen(false);
+    form.reset({ ...blank, revision, startedAt: Date.now(), name: v.name, email: v.email, phone: v.phone, preferredContact: v.preferredContact });
     submit.reset();
     setSentNext(null);
-    startedAt.current = Date.now();
   }
 
   const name = form.getValues("name");
@@ -250,7 +248,7 @@ export default function EnquiryFormBody({ slug, revision, vehicleTitle, stockNum
           type="button"
           aria-expanded={tradeInOpen}
           aria-controls={`${uid}-tradein`}
-          onClick={() => setTradeInOpen((o) => !o)}
+          onClick={() => form.setValue("tradeInOpen", !tradeInOpen)}
           className="flex min-h-11 w-full items-center justify-between gap-3 px-4 py-3 text-left font-bold"
         >
           <span>

@@ -37,18 +37,30 @@ const cents = (s: string) => (s.trim() === "" ? undefined : Math.round(Number(s)
 function toBody(d: Draft) {
   const makes = d.makes.split(",").map((m) => m.trim()).filter(Boolean);
   const filter = {
-    statuses: d.statuses, ...(makes.length ? { makes } : {}), ...(d.bodyTypes.length ? { bodyTypes: d.bodyTypes } : {}), ...(d.fuelTypes.length ? { fuelTypes: d.fuelTypes } : {}),
+    statuses: d.statuses,
+    ...(makes.length ? { makes } : {}),
+    ...(d.bodyTypes.length ? { bodyTypes: d.bodyTypes } : {}),
+    ...(d.fuelTypes.length ? { fuelTypes: d.fuelTypes } : {}),
     priceMinCents: cents(d.priceMin), priceMaxCents: cents(d.priceMax), daysInStockMin: num(d.daysMin), daysInStockMax: num(d.daysMax),
   };
   const clean = Object.fromEntries(Object.entries(filter).filter(([, v]) => v !== undefined));
   const withColumns = FORMATS_WITH_COLUMNS.includes(d.format);
   return {
     name: d.name, format: d.format, units: d.units, filter: clean,
-    ...(withColumns ? { columns: d.columns.map((c) => ({ key: c.key, header: c.header, ...(takesWidth(c.key) ? { photoWidth: Number(c.photoWidth || 1024) } : {}) })) } : {}),
+    ...(withColumns
+      ? { columns: d.columns.map((c) => ({ key: c.key, header: c.header, ...(takesWidth(c.key) ? { photoWidth: Number(c.photoWidth || 1024) } : {}) })) }
+      : {}),
   };
 }
 
-function Checkboxes({ legend, options, value, onChange }: { legend: string; options: ReadonlyArray<readonly [string, string]>; value: string[]; onChange: (v: string[]) => void }) {
+interface CheckboxesProps {
+  legend: string;
+  options: ReadonlyArray<readonly [string, string]>;
+  value: string[];
+  onChange: (v: string[]) => void;
+}
+
+function Checkboxes({ legend, options, value, onChange }: CheckboxesProps) {
   return (
     <fieldset>
       <legend className="mb-1 text-sm font-bold">{legend}</legend>

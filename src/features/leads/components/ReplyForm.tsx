@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { useReplyToLead, type LeadDetail } from "../api/leads.ts";
 import { TextAreaField } from "../../../components/form/Field.tsx";
-import { setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { leadMessageSchema } from "../../../../shared/schemas/enquiries.ts";
@@ -45,7 +45,7 @@ export function ReplyForm({ lead }: { lead: LeadDetail }) {
     );
 
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-3">
+    <form onSubmit={onSubmitOf(submit)} noValidate className="flex flex-col gap-3">
       {sent ? <Notice tone="success" title="Reply queued">It goes out from the dealership's address within a moment; its state shows in the conversation.</Notice> : null}
       {error && !fieldError ? <Notice tone="danger" title="The reply was not sent">{error.message} Your text is still here.</Notice> : null}
       <TextAreaField

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { useShareVehicle } from "../api/leads.ts";
 import { isApiError } from "../../../lib/api-client.ts";
 import { TextAreaField, TextField } from "../../../components/form/Field.tsx";
-import { setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { shareVehicleSchema } from "../../../../shared/schemas/enquiries.ts";
@@ -31,7 +31,7 @@ export function ShareVehicle({ vehicleId, published }: { vehicleId: number; publ
   );
 
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label="Send the condition page to a buyer">
+    <form onSubmit={onSubmitOf(submit)} noValidate className="flex flex-col gap-4" aria-label="Send the condition page to a buyer">
       {!published ? (
         <Notice tone="info" title="Publish the vehicle first">
           Buyers can only open a published condition page, so there is nothing to send yet.

@@ -1,11 +1,11 @@
 import { useMemo, useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { useUpdateLead, type LeadDetail } from "../api/leads.ts";
 import { useQuery } from "@tanstack/react-query";
 import { isApiError } from "../../../lib/api-client.ts";
 import { usersQueryOptions } from "../../users/api/users.ts";
 import { SelectField, TextAreaField, TextField } from "../../../components/form/Field.tsx";
-import { setServerErrors } from "../../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { LEAD_STATUSES, LEAD_STATUS_LABELS, type LeadStatus } from "../../../../shared/constants/leads.ts";
@@ -42,7 +42,7 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
   const base = useMemo(() => fromLead(lead), [lead]);
   const form = useForm<WorkValues>({ values: base, resetOptions: { keepDirtyValues: true } });
   const { errors } = form.formState;
-  const { status, assigneeId: assigneeText, followUpOn: followUpText, note } = form.watch();
+  const { status = lead.status, assigneeId: assigneeText = "", followUpOn: followUpText = "", note = "" } = useWatch({ control: form.control });
   const [saved, setSaved] = useState<string | null>(null);
   const [pending, setPending] = useState<"take" | "save" | null>(null);
   const mayAssign = can(me, "leads.assign");
@@ -94,7 +94,7 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
   const assigneeWords = lead.assigneeId ? (lead.assigneeId === me.id ? "You" : lead.assigneeName ?? "Someone") : "Nobody yet";
 
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label="Work this lead">
+    <form onSubmit={onSubmitOf(submit)} noValidate className="flex flex-col gap-4" aria-label="Work this lead">
       {stale ? (
         <Notice tone="caution" title="Someone else changed this lead while you were working">
           <p>Load their changes; what you chose and typed here stays as it is, and you can save again.</p>
@@ -139,7 +139,7 @@ export function WorkPanel({ lead, me, onReload, reloading }: { lead: LeadDetail;
           <div className="flex flex-wrap items-center gap-3">
             <span>{assigneeWords}</span>
             {lead.assigneeId !== me.id ? (
-              <Button type="button" tone="secondary" busy={update.isPending && pending === "take"} onClick={() => save({ assigneeId: me.id } as typeof changed, "The lead is yours.", "take")}>
+              <Button type="button" tone="secondary" busy={update.isPending && pending === "take"} onClick={() => save({ assigneeId: me.id }, "The lead is yours.", "take")}>
                 Take this lead
               </Button>
             ) : null}

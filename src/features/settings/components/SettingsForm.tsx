@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { useUpdateDealership, type DealershipView } from "../api/dealership.ts";
 import { CheckboxField, SelectField, TextAreaField, TextField } from "../../../components/form/Field.tsx";
-import { setServerErrors, useZodFormAsTyped } from "../../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodFormAsTyped } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { Panel } from "../../../components/ui/Page.tsx";
@@ -31,7 +31,9 @@ const toBody = (version: number) => (form: Form) => {
 
 export function SettingsForm({ dealership }: { dealership: DealershipView }) {
   const update = useUpdateDealership();
-  const form = useZodFormAsTyped<Form, typeof dealershipSettingsSchema>(dealershipSettingsSchema, toBody(dealership.version), { defaultValues: toForm(dealership) });
+  const form = useZodFormAsTyped<Form, typeof dealershipSettingsSchema>(dealershipSettingsSchema, toBody(dealership.version), {
+    defaultValues: toForm(dealership),
+  });
   const { errors } = form.formState;
   const [saved, setSaved] = useState(false);
   const text = (k: string) => ({ ...form.register(k), error: errors[k]?.message });
@@ -60,7 +62,7 @@ export function SettingsForm({ dealership }: { dealership: DealershipView }) {
 
   const preset = MARKETS[form.watch("market") as MarketCode];
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-6">
+    <form onSubmit={onSubmitOf(submit)} noValidate className="flex flex-col gap-6">
       {saved ? <Notice tone="success" title="Settings saved" /> : null}
       {update.error ? (
         <Notice tone="danger" title={update.error.message}>
@@ -82,7 +84,7 @@ export function SettingsForm({ dealership }: { dealership: DealershipView }) {
       </Panel>
       <Panel title="Market rules">
         <div className="grid gap-4 sm:grid-cols-2">
-          <SelectField label="Market" {...form.register("market", { onChange: (e) => applyMarket(e.target.value as MarketCode) })} error={errors.market?.message} hint={preset ? `Tread minimum from ${preset.treadSource.replace(/\s*\(TRADE\.md[^)]*\)/, "")}.` : undefined}>
+          <SelectField label="Market" {...form.register("market", { onChange: (e: { target: { value: string } }) => applyMarket(e.target.value as MarketCode) })} error={errors.market?.message} hint={preset ? `Tread minimum from ${preset.treadSource.replace(/\s*\(TRADE\.md[^)]*\)/, "")}.` : undefined}>
             {MARKET_CODES.map((m) => (
               <option key={m} value={m}>{MARKETS[m].name}</option>
             ))}

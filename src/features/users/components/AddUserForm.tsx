@@ -2,7 +2,7 @@ import { useState } from "react";
 import { useCreateUser } from "../api/users.ts";
 import { isApiError } from "../../../lib/api-client.ts";
 import { SelectField, TextField } from "../../../components/form/Field.tsx";
-import { setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { ROLES, ROLE_LABELS, type Role } from "../../../../shared/constants/roles.ts";
@@ -16,7 +16,7 @@ export function AddUserForm() {
   const { errors } = form.formState;
   const [added, setAdded] = useState<string | null>(null);
   const fields = isApiError(create.error) ? create.error.fields : {};
-  const role = form.watch("role") as Role;
+  const role = form.watch("role");
 
   const submit = form.handleSubmit(
     (values) => {
@@ -33,7 +33,7 @@ export function AddUserForm() {
   );
 
   return (
-    <form onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="Add a staff member">
+    <form onSubmit={onSubmitOf(submit)} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="Add a staff member">
       {added ? (
         <div className="sm:col-span-2">
           <Notice tone="success" title="Added">
