@@ -70,3 +70,58 @@ describe("stock entry in Chromium", () => {
     await page.close();
   });
 });
+
+describe("the editor after the person's own status move (issue 12)", () => {
+  it("when sales moves a vehicle's status and then edits and saves a field, then the save is accepted, not refused as a conflict with their own move", async () => {
+    const sales = await world.t.signIn("sales");
+    const created = await sales.post("/api/vehicles").send({ make: "Corvane", model: "Pimlet", buildYear: 2018, colour: "Moss green" });
+    expect(created.status).toBe(201);
+    const id = created.body.vehicle.id as number;
+
+    const page = await world.browser.newPage({ viewport: { width: 1366, height: 900 } });
+    await signIn(page, "sales@demo.test");
+    await page.goto(`${world.url}/app/vehicles/${id}`);
+    await expect.poll(() => page.getByLabel("Colour").inputValue()).toBe("Moss green");
+
+    const status = page.getByRole("region", { name: "Status", exact: true });
+    const moved = page.waitForResponse((r) => r.url().endsWith(`/api/vehicles/${id}/status`) && r.request().method() === "POST");
+    await status.getByRole("button", { name: "Start preparing" }).click();
+    expect((await moved).status()).toBe(200);
+    await expect.poll(() => status.getByRole("button", { name: "Back to intake" }).count()).toBe(1);
+
+    await page.getByLabel("Colour").fill("Harbour blue");
+    const saved = page.waitForResponse((r) => r.url().endsWith(`/api/vehicles/${id}`) && r.request().method() === "PATCH");
+    await page.getByRole("button", { name: "Save changes" }).click();
+    expect((await saved).status()).toBe(200);
+    await expect.poll(() => page.getByText("All changes saved").count()).toBe(1);
+    expect(await page.getByLabel("Colour").inputValue()).toBe("Harbour blue");
+    expect(await page.getByText("Someone saved this vehicle after you opened it").count()).toBe(0);
+    await page.close();
+  });
+
+  it("when someone else saves a field meanwhile, then the save is still refused as a conflict, and taking theirs keeps mine on top", async () => {
+    const sales = await world.t.signIn("sales");
+    const created = await sales.post("/api/vehicles").send({ make: "Drovell", model: "Fenwick", colour: "Chalk white" });
+    const id = created.body.vehicle.id as number;
+
+    const page = await world.browser.newPage({ viewport: { width: 1366, height: 900 } });
+    await signIn(page, "sales@demo.test");
+    await page.goto(`${world.url}/app/vehicles/${id}`);
+    await expect.poll(() => page.getByLabel("Colour").inputValue()).toBe("Chalk white");
+
+    const admin = await world.t.signIn("admin");
+    expect((await admin.patch(`/api/vehicles/${id}`).send({ version: created.body.vehicle.version, colour: "Ember red" })).status).toBe(200);
+
+    await page.getByLabel("Variant or trim").fill("1.6 estate");
+    await page.getByRole("button", { name: "Save changes" }).click();
+    await expect.poll(() => page.getByText("Someone saved this vehicle after you opened it").count()).toBe(1);
+    await page.getByRole("button", { name: "Take their changes, keep mine on top" }).click();
+    expect(await page.getByLabel("Colour").inputValue()).toBe("Ember red");
+    expect(await page.getByLabel("Variant or trim").inputValue()).toBe("1.6 estate");
+    const saved = page.waitForResponse((r) => r.url().endsWith(`/api/vehicles/${id}`) && r.request().method() === "PATCH");
+    await page.getByRole("button", { name: "Save changes" }).click();
+    expect((await saved).status()).toBe(200);
+    await expect.poll(() => page.getByText("All changes saved").count()).toBe(1);
+    await page.close();
+  });
+});

@@ -13,6 +13,7 @@ import type { DealershipView } from "../../settings/api/dealership.ts";
 import { FIELDS, SECTIONS, type FieldDef } from "./fields.ts";
 import { changedFields, emptyForm, formFromVehicle, formToInput, liveNumber, type VehicleForm } from "./form-model.ts";
 import { clearDraft, loadDraft, saveDraft } from "./draft.ts";
+import { useOwnMoves } from "./own-moves.ts";
 import { LiveFigures } from "./LiveFigures.tsx";
 import { ServiceHistoryEditor } from "./ServiceHistoryEditor.tsx";
 import { FeaturesInput } from "./FeaturesInput.tsx";
@@ -43,10 +44,26 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
   const update = useUpdateVehicle(vehicle?.id ?? 0);
   const mutation = vehicle ? update : create;
   const firstError = useRef<HTMLDivElement>(null);
+  const sentBody = useRef<unknown>(null);
+  const ownMoves = useOwnMoves(sentBody);
 
   const input = useMemo(() => formToInput(form), [form]);
   const baseInput = useMemo(() => (base ? formToInput(formFromVehicle(base)) : formToInput(initial)), [base, initial]);
   const dirty = Object.keys(changedFields(input, baseInput)).length > 0;
+
+  // A status move or publish by this person (side panel) bumps the version: the record it brings becomes the base,
+  // with their unsaved edits still on top, so their next save is not refused as a conflict with themselves. Only
+  // while none of the editor's fields differ from the base; if they do, someone else saved too, and the conflict
+  // notice lets the person choose. (Adjusted during render, React's pattern for state that follows a prop.)
+  const [seenVersion, setSeenVersion] = useState(vehicle?.version);
+  if (vehicle && vehicle.version !== seenVersion) {
+    setSeenVersion(vehicle.version);
+    const own = base && vehicle.version > base.version && ownMoves.any && !conflict;
+    if (own && !Object.keys(changedFields(formToInput(formFromVehicle(vehicle)), baseInput)).length) {
+      setBase(vehicle);
+      ownMoves.taken();
+    }
+  }
 
   // Keep the draft as the person types; drop it once nothing differs from the saved record.
   useEffect(() => {
@@ -68,7 +85,12 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
   const derived = useMemo(() => {
     return computeDerived(
       derivedInputOf(input),
-      { today: dealershipDay(dealership.timeZone), checkDigitMandatory: dealership.vinCheckDigitMandatory, serviceIntervalKm: dealership.serviceIntervalKm, serviceIntervalMonths: dealership.serviceIntervalMonths },
+      {
+        today: dealershipDay(dealership.timeZone),
+        checkDigitMandatory: dealership.vinCheckDigitMandatory,
+        serviceIntervalKm: dealership.serviceIntervalKm,
+        serviceIntervalMonths: dealership.serviceIntervalMonths,
+      },
     );
   }, [input, dealership]);
 
@@ -102,6 +124,7 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
       return;
     }
     setErrors({});
+    sentBody.current = body;
     mutation.mutate(body, {
       onSuccess: ({ vehicle: v }) => {
         clearDraft(draftId);
@@ -110,7 +133,7 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
         setBase(v);
         setForm(formFromVehicle(v));
         setSaved(true);
-        if (!base) navigate(`/app/vehicles/${v.id}`, { replace: true });
+        if (!base) void navigate(`/app/vehicles/${v.id}`, { replace: true });
       },
       onError: (err) => {
         if (!isApiError(err)) return;
@@ -211,7 +234,13 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
               <div className="flex flex-col gap-4">
                 <div className="grid gap-4 sm:grid-cols-2">{FIELDS.filter((f) => f.group === s.group).map(field)}</div>
                 {s.group === "history" ? (
-                  <ServiceHistoryEditor rows={form.serviceHistory} flags={derived.odometerFlags} errors={errors} disabled={locked} onChange={(rows) => setForm((f) => ({ ...f, serviceHistory: rows }))} />
+                  <ServiceHistoryEditor
+                    rows={form.serviceHistory}
+                    flags={derived.odometerFlags}
+                    errors={errors}
+                    disabled={locked}
+                    onChange={(rows) => setForm((f) => ({ ...f, serviceHistory: rows }))}
+                  />
                 ) : null}
                 {s.group === "listing" ? (
                   <>
@@ -223,7 +252,12 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
               <LiveFigures
                 group={s.group}
                 derived={derived}
-                input={{ powerKw: liveNumber(input.powerKw), torqueNm: liveNumber(input.torqueNm), fuelConsumptionL100km: liveNumber(input.fuelConsumptionL100km), buildYear: liveNumber(input.buildYear) }}
+                input={{
+                  powerKw: liveNumber(input.powerKw),
+                  torqueNm: liveNumber(input.torqueNm),
+                  fuelConsumptionL100km: liveNumber(input.fuelConsumptionL100km),
+                  buildYear: liveNumber(input.buildYear),
+                }}
                 locale={dealership.locale}
                 distanceUnit={dealership.distanceUnit}
               />
