@@ -91,7 +91,9 @@ describe("a buyer on the public pages", () => {
     expect(await about.innerText()).toMatch(/inspected independently/);
     // The enquiry place holds the form and offers phone and e-mail with the stock number.
     const enquiry = page.getByRole("region", { name: "Ask about this vehicle" });
-    // The enquiry form sits in the place kept for it (its own flow is tests/e2e/enquiries.test.ts).
+    // The enquiry form sits in the place kept for it (its own flow is tests/e2e/enquiries.test.ts); it loads after the
+    // page has drawn (features/enquiries/EnquiryForm.tsx), so wait for it.
+    await enquiry.locator("form").waitFor();
     expect(await enquiry.getByRole("button", { name: /send/i }).count()).toBeGreaterThan(0);
     expect(await enquiry.locator('a[href^="mailto:"][href*="subject="]').first().getAttribute("href")).toMatch(/subject=Stock%20number%20/);
     expect(await enquiry.locator("form").count()).toBe(1);
