@@ -4,7 +4,7 @@ import { route } from "../../middleware/route.ts";
 import { tokenParams } from "../../../shared/schemas/common.ts";
 import { signInSchema } from "../../../shared/schemas/auth.ts";
 import { signIn } from "./auth.service.ts";
-import { presentSessionUser } from "../users/users.presenter.ts";
+import { presentSessionUser } from "./auth.presenter.ts";
 import { resetRequestSchema, tokenPasswordSchema } from "../../../shared/schemas/enquiries.ts";
 import * as tokens from "./tokens.service.ts";
 

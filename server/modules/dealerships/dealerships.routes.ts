@@ -2,7 +2,8 @@ import { Router } from "express";
 import type { AppContext } from "../../lib/context.ts";
 import { route } from "../../middleware/route.ts";
 import { dealershipSettingsSchema } from "../../../shared/schemas/dealership.ts";
-import { presentDealership, presentPublicDealership, primaryDealership, updateSettings } from "./dealerships.service.ts";
+import { primaryDealership, updateSettings } from "./dealerships.service.ts";
+import { presentDealership, presentPublicDealership } from "./dealerships.presenter.ts";
 import { notFound } from "../../lib/errors.ts";
 
 export function dealershipRoutes(ctx: AppContext): Router {

@@ -9,9 +9,6 @@ import { actorOf, diffFields, recordAudit } from "../audit/audit.service.ts";
 import type { DealershipSettingsInput } from "../../../shared/schemas/dealership.ts";
 import { presentDealership } from "./dealerships.presenter.ts";
 
-// dealerships.routes.ts still imports these from here; they live in dealerships.presenter.ts.
-export { presentDealership, presentPublicDealership } from "./dealerships.presenter.ts";
-
 /** The dealership's calendar day now: the clock every derived figure is computed against. */
 export const todayFor = (ctx: AppContext, d: Pick<Dealership, "timeZone">) => dayIn(d.timeZone, ctx.now());
 
