@@ -34,7 +34,9 @@ export function ServiceHistoryEditor({
               {["date", "odometerKm", "kind", "workshop", "notes"].map((k) => (err(k) ? <p key={k} className="mt-1 text-sm font-bold text-brick">{err(k)}</p> : null))}
               {flag ? (
                 <p className="mt-2 rounded-sm border-l-4 border-ochre bg-ochre-wash px-2 py-1 text-sm">
-                  <strong>Odometer went down:</strong> {flag.laterKm.toLocaleString()} km here, after {flag.earlierKm.toLocaleString()} km on {flag.earlierDate}. Check the book or invoice and explain it in the notes; do not advertise the reading as verified until it is resolved.
+                  <strong>Odometer went down:</strong> {flag.laterKm.toLocaleString()} km here, after {flag.earlierKm.toLocaleString()} km on{" "}
+                  {flag.earlierDate}. Check the book or invoice and explain it in the notes; do not advertise the reading as verified until it is
+                  resolved.
                 </p>
               ) : null}
               {!disabled ? (

@@ -29,7 +29,8 @@ export function emptyForm(distanceUnit: "km" | "mi"): VehicleForm {
 export function formFromVehicle(v: VehicleView): VehicleForm {
   const values: Record<string, string> = {};
   for (const f of FIELDS) {
-    const raw = (v as unknown as Record<string, unknown>)[f.name];
+    // The record's plain fields: text, numbers and dates as ISO text (no objects).
+    const raw = (v as unknown as Record<string, string | number | null | undefined>)[f.name];
     values[f.name] = raw == null ? "" : f.kind === "money" ? String(Number(raw) / 100) : String(raw);
   }
   values[COPY] = v.description ?? "";
