@@ -29,12 +29,19 @@ export interface DemoVehicle {
 }
 
 type Field = keyof CreateVehicleInput;
-type Spec = Pick<
-  CreateVehicleInput,
-  | "bodyType" | "doors" | "seats" | "driveType" | "fuelType" | "engineCapacityCc" | "cylinders" | "aspiration" | "powerKw"
-  | "torqueNm" | "transmission" | "gears" | "fuelTankLitres" | "fuelConsumptionL100km" | "consumptionTestCycle"
-  | "batteryKwh" | "energyKwh100km" | "kerbWeightKg"
->;
+
+/** The specification a model line fixes: these fields, in this order (the columns of the table below). */
+const SPEC_FIELDS = [
+  "bodyType", "doors", "seats", "driveType", "fuelType", "engineCapacityCc", "cylinders", "aspiration", "powerKw",
+  "torqueNm", "transmission", "gears", "fuelTankLitres", "fuelConsumptionL100km", "consumptionTestCycle",
+  "batteryKwh", "energyKwh100km", "kerbWeightKg",
+] as const satisfies readonly Field[];
+type Spec = Pick<CreateVehicleInput, (typeof SPEC_FIELDS)[number]>;
+type RowOf<F extends readonly (keyof Spec)[]> = { -readonly [I in keyof F]: Spec[F[I]] };
+type SpecRow = RowOf<typeof SPEC_FIELDS>;
+
+/** One row of the table as a Spec, its keys in SPEC_FIELDS order (the vehicle input spreads it, so the order shows). */
+const spec = (row: SpecRow): Spec => Object.fromEntries(SPEC_FIELDS.map((field, i) => [field, row[i]] as const));
 
 interface Line {
   make: string;
@@ -54,56 +61,18 @@ interface Line {
   features: string[];
 }
 
-const petrolHatch: Spec = {
-  bodyType: "hatchback", doors: 5, seats: 5, driveType: "fwd", fuelType: "petrol", engineCapacityCc: 1199, cylinders: 3,
-  aspiration: "turbo", powerKw: 74, torqueNm: 160, transmission: "manual", gears: 5, fuelTankLitres: 40,
-  fuelConsumptionL100km: 5.1, consumptionTestCycle: "wltp", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 1050,
-};
-const hybridHatch: Spec = {
-  bodyType: "hatchback", doors: 5, seats: 5, driveType: "fwd", fuelType: "hybrid", engineCapacityCc: 1798, cylinders: 4,
-  aspiration: "natural", powerKw: 90, torqueNm: 142, transmission: "cvt", gears: null, fuelTankLitres: 43,
-  fuelConsumptionL100km: 4.2, consumptionTestCycle: "wltp", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 1370,
-};
-const dieselSevenSeat: Spec = {
-  bodyType: "suv", doors: 5, seats: 7, driveType: "awd", fuelType: "diesel", engineCapacityCc: 2199, cylinders: 4,
-  aspiration: "turbo", powerKw: 147, torqueNm: 440, transmission: "automatic", gears: 8, fuelTankLitres: 68,
-  fuelConsumptionL100km: 8.8, consumptionTestCycle: "wltp", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 1930,
-};
-const petrolMidSuv: Spec = {
-  bodyType: "suv", doors: 5, seats: 5, driveType: "awd", fuelType: "petrol", engineCapacityCc: 1998, cylinders: 4,
-  aspiration: "natural", powerKw: 115, torqueNm: 200, transmission: "cvt", gears: null, fuelTankLitres: 55,
-  fuelConsumptionL100km: 7.4, consumptionTestCycle: "wltp", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 1520,
-};
-const electricSuv: Spec = {
-  bodyType: "suv", doors: 5, seats: 5, driveType: "rwd", fuelType: "electric", engineCapacityCc: null, cylinders: 0,
-  aspiration: null, powerKw: 150, torqueNm: 350, transmission: "automatic", gears: 1, fuelTankLitres: null,
-  fuelConsumptionL100km: null, consumptionTestCycle: "wltp", batteryKwh: 64, energyKwh100km: 15.8, kerbWeightKg: 1850,
-};
-const plugInSuv: Spec = {
-  bodyType: "suv", doors: 5, seats: 5, driveType: "awd", fuelType: "plug_in_hybrid", engineCapacityCc: 1498, cylinders: 4,
-  aspiration: "turbo", powerKw: 188, torqueNm: 400, transmission: "automatic", gears: 6, fuelTankLitres: 55,
-  fuelConsumptionL100km: 1.9, consumptionTestCycle: "wltp", batteryKwh: 18, energyKwh100km: 19.5, kerbWeightKg: 1870,
-};
-const dieselUte: Spec = {
-  bodyType: "ute", doors: 4, seats: 5, driveType: "4wd", fuelType: "diesel", engineCapacityCc: 2755, cylinders: 4,
-  aspiration: "turbo", powerKw: 150, torqueNm: 500, transmission: "automatic", gears: 6, fuelTankLitres: 80,
-  fuelConsumptionL100km: 7.9, consumptionTestCycle: "nedc", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 2100,
-};
-const dieselVan: Spec = {
-  bodyType: "van", doors: 4, seats: 3, driveType: "fwd", fuelType: "diesel", engineCapacityCc: 1995, cylinders: 4,
-  aspiration: "turbo", powerKw: 110, torqueNm: 340, transmission: "manual", gears: 6, fuelTankLitres: 70,
-  fuelConsumptionL100km: 7.6, consumptionTestCycle: "nedc", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 1890,
-};
-const petrolSedan: Spec = {
-  bodyType: "sedan", doors: 4, seats: 5, driveType: "fwd", fuelType: "petrol", engineCapacityCc: 2488, cylinders: 4,
-  aspiration: "natural", powerKw: 135, torqueNm: 235, transmission: "automatic", gears: 6, fuelTankLitres: 60,
-  fuelConsumptionL100km: 7.3, consumptionTestCycle: "nedc", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 1480,
-};
-const dieselWagon: Spec = {
-  bodyType: "wagon", doors: 5, seats: 5, driveType: "awd", fuelType: "diesel", engineCapacityCc: 1968, cylinders: 4,
-  aspiration: "turbo", powerKw: 110, torqueNm: 340, transmission: "dual_clutch", gears: 7, fuelTankLitres: 66,
-  fuelConsumptionL100km: 5.4, consumptionTestCycle: "nedc", batteryKwh: null, energyKwh100km: null, kerbWeightKg: 1610,
-};
+// eslint-disable-next-line max-len -- the table's header, aligned with its columns
+//                            body         doors seats drive  fuel              cc    cyl aspiration kW   N·m  gearbox        gears tank  l/100 cycle   kWh   kWh/100 kerb
+const petrolHatch     = spec(["hatchback", 5,    5,    "fwd", "petrol",         1199, 3,  "turbo",   74,  160, "manual",      5,    40,   5.1,  "wltp", null, null,   1050]);
+const hybridHatch     = spec(["hatchback", 5,    5,    "fwd", "hybrid",         1798, 4,  "natural", 90,  142, "cvt",         null, 43,   4.2,  "wltp", null, null,   1370]);
+const dieselSevenSeat = spec(["suv",       5,    7,    "awd", "diesel",         2199, 4,  "turbo",   147, 440, "automatic",   8,    68,   8.8,  "wltp", null, null,   1930]);
+const petrolMidSuv    = spec(["suv",       5,    5,    "awd", "petrol",         1998, 4,  "natural", 115, 200, "cvt",         null, 55,   7.4,  "wltp", null, null,   1520]);
+const electricSuv     = spec(["suv",       5,    5,    "rwd", "electric",       null, 0,  null,      150, 350, "automatic",   1,    null, null, "wltp", 64,   15.8,   1850]);
+const plugInSuv       = spec(["suv",       5,    5,    "awd", "plug_in_hybrid", 1498, 4,  "turbo",   188, 400, "automatic",   6,    55,   1.9,  "wltp", 18,   19.5,   1870]);
+const dieselUte       = spec(["ute",       4,    5,    "4wd", "diesel",         2755, 4,  "turbo",   150, 500, "automatic",   6,    80,   7.9,  "nedc", null, null,   2100]);
+const dieselVan       = spec(["van",       4,    3,    "fwd", "diesel",         1995, 4,  "turbo",   110, 340, "manual",      6,    70,   7.6,  "nedc", null, null,   1890]);
+const petrolSedan     = spec(["sedan",     4,    5,    "fwd", "petrol",         2488, 4,  "natural", 135, 235, "automatic",   6,    60,   7.3,  "nedc", null, null,   1480]);
+const dieselWagon     = spec(["wagon",     5,    5,    "awd", "diesel",         1968, 4,  "turbo",   110, 340, "dual_clutch", 7,    66,   5.4,  "nedc", null, null,   1610]);
 
 const UTE_FEATURES = ["Tow bar", "Tub liner", "Rear diff lock", "Side steps", "Hill descent control"];
 const VAN_FEATURES = ["Cargo barrier", "Sliding side door", "Rubber cargo floor", "Rear barn doors"];

@@ -51,7 +51,7 @@ export interface RouteSpec<A extends Allow, P extends SchemaFor | undefined, Q e
   body?: B;
   /** Middleware run after params and query are checked and before the body is (the multipart reader). */
   uses?: RequestHandler[];
-  /** The status of a JSON answer (201 for a create). */
+  /** The status of a JSON answer (201 for a create); 204 answers with no body, whatever the handler returns. */
   status?: number;
 }
 
@@ -139,8 +139,9 @@ export function route<
       res,
     } as RouteInput<A, P, Q, B>;
     const result = await handler(input);
-    if (res.headersSent || result === undefined) return;
-    res.status(spec.status ?? 200).json(result);
+    if (res.headersSent) return;
+    if (spec.status === 204) res.status(204).end();
+    else if (result !== undefined) res.status(spec.status ?? 200).json(result);
   });
   return chain;
 }

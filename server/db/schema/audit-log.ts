@@ -1,11 +1,11 @@
-import { bigint, datetime, index, int, mysqlTable, varchar } from "drizzle-orm/mysql-core";
-import { jsonText } from "./columns.ts";
+import { index, int, mysqlTable, varchar } from "drizzle-orm/mysql-core";
+import { createdAt, jsonText, logId } from "./columns.ts";
 
 /** Who did what, when, to which record, with the values before and after. Append-only. */
 export const auditLog = mysqlTable(
   "audit_log",
   {
-    id: bigint({ mode: "number", unsigned: true }).autoincrement().primaryKey(),
+    id: logId(),
     dealershipId: int().notNull(),
     // Kept as plain values, not foreign keys, so the trail outlives what it describes.
     userId: varchar({ length: 255 }),
@@ -15,9 +15,7 @@ export const auditLog = mysqlTable(
     entityId: varchar({ length: 255 }).notNull(),
     before: jsonText<Record<string, unknown> | null>(),
     after: jsonText<Record<string, unknown> | null>(),
-    at: datetime({ mode: "date", fsp: 3 })
-      .notNull()
-      .$defaultFn(() => new Date()),
+    at: createdAt(),
   },
   (t) => [index("audit_entity_idx").on(t.entityType, t.entityId, t.at), index("audit_dealership_idx").on(t.dealershipId, t.at)],
 );

@@ -1,9 +1,9 @@
 import { boolean, double, int, mysqlTable, varchar, text, mysqlEnum } from "drizzle-orm/mysql-core";
-import { createdAt, updatedAt, version } from "./columns.ts";
+import { editedRecord, serialId } from "./columns.ts";
 import { MARKET_CODES, DISTANCE_UNITS } from "../../../shared/constants/market.ts";
 
 export const dealerships = mysqlTable("dealerships", {
-  id: int().autoincrement().primaryKey(),
+  id: serialId(),
   slug: varchar({ length: 80 }).notNull().unique(),
   name: varchar({ length: 160 }).notNull(),
   addressLine: varchar({ length: 200 }).notNull().default(""),
@@ -31,9 +31,7 @@ export const dealerships = mysqlTable("dealerships", {
   // The last stock number issued; the next vehicle takes this plus one, under a row lock.
   lastStockNumber: int().notNull().default(10000),
   disclaimerMarkdown: text().notNull(),
-  version: version(),
-  createdAt: createdAt(),
-  updatedAt: updatedAt(),
+  ...editedRecord(),
 });
 
 export type Dealership = typeof dealerships.$inferSelect;

@@ -1,16 +1,14 @@
 import { boolean, double, index, int, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { DEFECT_KINDS, REPAIR_PLANS, SEVERITIES, ZONES } from "../../../shared/constants/evidence.ts";
-import { createdAt, updatedAt, version } from "./columns.ts";
+import { editedRecord, parentId, serialId } from "./columns.ts";
 import { vehicles } from "./vehicles.ts";
 import { photos } from "./photos.ts";
 
 export const defects = mysqlTable(
   "defects",
   {
-    id: int().autoincrement().primaryKey(),
-    vehicleId: int()
-      .notNull()
-      .references(() => vehicles.id, { onDelete: "cascade" }),
+    id: serialId(),
+    vehicleId: parentId(() => vehicles.id, { onDelete: "cascade" }),
     /** Numbered per vehicle; the number on the pin and in the list. Never reused. */
     number: int().notNull(),
     zone: mysqlEnum(ZONES).notNull(),
@@ -28,9 +26,7 @@ export const defects = mysqlTable(
     pinY: double(),
     closeupKey: varchar({ length: 200 }),
     recordedBy: varchar({ length: 255 }),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...editedRecord(),
   },
   (t) => [uniqueIndex("defects_number_uq").on(t.vehicleId, t.number), index("defects_photo_idx").on(t.photoId)],
 );

@@ -1,6 +1,6 @@
-import { bigint, datetime, index, int, mysqlEnum, mysqlTable, smallint, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { bigint, index, int, mysqlEnum, mysqlTable, smallint, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { FEED_FORMATS, FEED_UNITS, type FeedColumn, type FeedFilter } from "../../../shared/schemas/feeds.ts";
-import { createdAt, jsonText, updatedAt, version } from "./columns.ts";
+import { createdAt, editedRecord, instant, jsonText, logId, parentId, serialId } from "./columns.ts";
 import { dealerships } from "./dealerships.ts";
 
 /**
@@ -10,10 +10,8 @@ import { dealerships } from "./dealerships.ts";
 export const feeds = mysqlTable(
   "feeds",
   {
-    id: int().autoincrement().primaryKey(),
-    dealershipId: int()
-      .notNull()
-      .references(() => dealerships.id),
+    id: serialId(),
+    dealershipId: parentId(() => dealerships.id),
     name: varchar({ length: 120 }).notNull(),
     format: mysqlEnum(FEED_FORMATS).notNull(),
     filter: jsonText<FeedFilter>().notNull(),
@@ -22,12 +20,10 @@ export const feeds = mysqlTable(
     units: mysqlEnum(FEED_UNITS).notNull().default("market"),
     tokenHash: varchar({ length: 64 }).notNull(),
     tokenHint: varchar({ length: 4 }).notNull(),
-    revokedAt: datetime({ mode: "date", fsp: 3 }),
+    revokedAt: instant(),
     createdBy: varchar({ length: 255 }),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
-    lastFetchedAt: datetime({ mode: "date", fsp: 3 }),
+    ...editedRecord(),
+    lastFetchedAt: instant(),
   },
   (t) => [uniqueIndex("feeds_token_hash_uq").on(t.tokenHash), index("feeds_dealership_idx").on(t.dealershipId, t.createdAt)],
 );
@@ -36,19 +32,15 @@ export const feeds = mysqlTable(
 export const feedFetches = mysqlTable(
   "feed_fetches",
   {
-    id: bigint({ mode: "number", unsigned: true }).autoincrement().primaryKey(),
-    feedId: int()
-      .notNull()
-      .references(() => feeds.id, { onDelete: "cascade" }),
-    at: datetime({ mode: "date", fsp: 3 })
-      .notNull()
-      .$defaultFn(() => new Date()),
+    id: logId(),
+    feedId: parentId(() => feeds.id, { onDelete: "cascade" }),
+    at: createdAt(),
     ip: varchar({ length: 64 }),
     userAgent: varchar({ length: 300 }),
     rows: int().notNull().default(0),
     bytes: bigint({ mode: "number" }).notNull().default(0),
     status: smallint().notNull(),
-    since: datetime({ mode: "date", fsp: 3 }),
+    since: instant(),
   },
   (t) => [index("feed_fetches_feed_idx").on(t.feedId, t.at)],
 );

@@ -1,17 +1,15 @@
-import { boolean, date, datetime, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
+import { boolean, date, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
 import { CONTACT_PREFERENCES, LEAD_STATUSES } from "../../../shared/constants/leads.ts";
-import { createdAt, jsonText, updatedAt, version } from "./columns.ts";
+import { createdAt, editedRecord, jsonText, parentId, serialId } from "./columns.ts";
 import { vehicles } from "./vehicles.ts";
 
 /** A buyer's enquiry about one vehicle, worked by sales as a lead. */
 export const leads = mysqlTable(
   "leads",
   {
-    id: int().autoincrement().primaryKey(),
+    id: serialId(),
     dealershipId: int().notNull(),
-    vehicleId: int()
-      .notNull()
-      .references(() => vehicles.id),
+    vehicleId: parentId(() => vehicles.id),
     /** The revision the buyer was reading when they wrote. */
     revisionNumber: int(),
     name: varchar({ length: 120 }).notNull(),
@@ -25,9 +23,7 @@ export const leads = mysqlTable(
     status: mysqlEnum(LEAD_STATUSES).notNull().default("waiting"),
     assigneeId: varchar({ length: 255 }),
     followUpOn: date({ mode: "string" }),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...editedRecord(),
   },
   (t) => [index("leads_dealership_idx").on(t.dealershipId, t.status, t.createdAt), index("leads_vehicle_idx").on(t.vehicleId)],
 );
@@ -36,18 +32,14 @@ export const leads = mysqlTable(
 export const leadNotes = mysqlTable(
   "lead_notes",
   {
-    id: int().autoincrement().primaryKey(),
-    leadId: int()
-      .notNull()
-      .references(() => leads.id, { onDelete: "cascade" }),
+    id: serialId(),
+    leadId: parentId(() => leads.id, { onDelete: "cascade" }),
     kind: mysqlEnum(["note", "status", "mail_out", "enquiry"]).notNull(),
     body: text().notNull(),
     userId: varchar({ length: 255 }),
     userName: varchar({ length: 120 }),
     outboxId: int(),
-    at: datetime({ mode: "date", fsp: 3 })
-      .notNull()
-      .$defaultFn(() => new Date()),
+    at: createdAt(),
   },
   (t) => [index("lead_notes_lead_idx").on(t.leadId, t.at)],
 );

@@ -1,5 +1,5 @@
-import { datetime, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
-import { createdAt } from "./columns.ts";
+import { index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
+import { createdAt, instant, serialId } from "./columns.ts";
 
 /**
  * Mail waiting to go, written in the same transaction as whatever caused it and sent after the commit; retried with
@@ -8,7 +8,7 @@ import { createdAt } from "./columns.ts";
 export const outbox = mysqlTable(
   "outbox",
   {
-    id: int().autoincrement().primaryKey(),
+    id: serialId(),
     toAddress: varchar({ length: 254 }).notNull(),
     subject: varchar({ length: 300 }).notNull(),
     text: text().notNull(),
@@ -16,9 +16,9 @@ export const outbox = mysqlTable(
     kind: varchar({ length: 40 }).notNull(),
     status: mysqlEnum(["pending", "sent", "failed"]).notNull().default("pending"),
     attempts: int().notNull().default(0),
-    nextAttemptAt: datetime({ mode: "date", fsp: 3 }).notNull(),
+    nextAttemptAt: instant().notNull(),
     lastError: varchar({ length: 500 }),
-    sentAt: datetime({ mode: "date", fsp: 3 }),
+    sentAt: instant(),
     createdAt: createdAt(),
   },
   (t) => [index("outbox_due_idx").on(t.status, t.nextAttemptAt)],
@@ -26,22 +26,20 @@ export const outbox = mysqlTable(
 
 /** Mail the demo's local fake SMTP server received (demo mode only), for the admin's outbox screen. */
 export const capturedMail = mysqlTable("captured_mail", {
-  id: int().autoincrement().primaryKey(),
+  id: serialId(),
   fromAddress: varchar({ length: 300 }).notNull(),
   toAddress: varchar({ length: 1000 }).notNull(),
   subject: varchar({ length: 300 }).notNull(),
   text: text().notNull(),
   html: text().notNull(),
-  receivedAt: datetime({ mode: "date", fsp: 3 })
-    .notNull()
-    .$defaultFn(() => new Date()),
+  receivedAt: createdAt(),
 });
 
 /** Single-use tokens for invitations and password resets, stored as SHA-256 hashes only. */
 export const authTokens = mysqlTable(
   "auth_tokens",
   {
-    id: int().autoincrement().primaryKey(),
+    id: serialId(),
     kind: mysqlEnum(["invite", "reset"]).notNull(),
     tokenHash: varchar({ length: 64 }).notNull().unique(),
     dealershipId: int().notNull(),
@@ -49,8 +47,8 @@ export const authTokens = mysqlTable(
     name: varchar({ length: 120 }).notNull().default(""),
     role: mysqlEnum(["admin", "sales", "workshop", "marketing"]),
     userId: varchar({ length: 255 }),
-    expiresAt: datetime({ mode: "date", fsp: 3 }).notNull(),
-    usedAt: datetime({ mode: "date", fsp: 3 }),
+    expiresAt: instant().notNull(),
+    usedAt: instant(),
     createdBy: varchar({ length: 255 }),
     createdAt: createdAt(),
   },

@@ -1,6 +1,6 @@
 import { boolean, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
 import { ZONES } from "../../../shared/constants/evidence.ts";
-import { createdAt, jsonText, updatedAt, version } from "./columns.ts";
+import { editedRecord, jsonText, parentId, serialId } from "./columns.ts";
 import { vehicles } from "./vehicles.ts";
 
 export interface PhotoVariant {
@@ -18,10 +18,8 @@ export interface PhotoVariant {
 export const photos = mysqlTable(
   "photos",
   {
-    id: int().autoincrement().primaryKey(),
-    vehicleId: int()
-      .notNull()
-      .references(() => vehicles.id, { onDelete: "cascade" }),
+    id: serialId(),
+    vehicleId: parentId(() => vehicles.id, { onDelete: "cascade" }),
     status: mysqlEnum(["processing", "ready", "failed"]).notNull().default("processing"),
     position: int().notNull(),
     isCover: boolean().notNull().default(false),
@@ -35,9 +33,7 @@ export const photos = mysqlTable(
     placeholder: text().notNull(),
     variants: jsonText<PhotoVariant[]>().notNull(),
     uploadedBy: varchar({ length: 255 }),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...editedRecord(),
   },
   (t) => [index("photos_vehicle_idx").on(t.vehicleId, t.position), index("photos_status_idx").on(t.status), index("photos_hash_idx").on(t.hash)],
 );

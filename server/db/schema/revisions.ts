@@ -1,5 +1,5 @@
-import { datetime, double, index, int, mysqlTable, primaryKey, uniqueIndex, varchar, text } from "drizzle-orm/mysql-core";
-import { jsonText } from "./columns.ts";
+import { double, index, int, mysqlTable, primaryKey, uniqueIndex, varchar, text } from "drizzle-orm/mysql-core";
+import { instant, jsonText, parentId, serialId } from "./columns.ts";
 import { vehicles } from "./vehicles.ts";
 import type { PublicSnapshot } from "../../../shared/schemas/public.ts";
 
@@ -11,15 +11,13 @@ import type { PublicSnapshot } from "../../../shared/schemas/public.ts";
 export const revisions = mysqlTable(
   "revisions",
   {
-    id: int().autoincrement().primaryKey(),
-    vehicleId: int()
-      .notNull()
-      .references(() => vehicles.id),
+    id: serialId(),
+    vehicleId: parentId(() => vehicles.id),
     number: int().notNull(),
     slug: varchar({ length: 120 }).notNull(),
     snapshot: jsonText<PublicSnapshot>().notNull(),
     changes: jsonText<string[]>().notNull(),
-    publishedAt: datetime({ mode: "date", fsp: 3 }).notNull(),
+    publishedAt: instant().notNull(),
     publishedBy: varchar({ length: 255 }),
     publishedByName: varchar({ length: 120 }),
     overrideReason: text(),
@@ -40,9 +38,7 @@ export const revisions = mysqlTable(
 export const revisionMedia = mysqlTable(
   "revision_media",
   {
-    revisionId: int()
-      .notNull()
-      .references(() => revisions.id),
+    revisionId: parentId(() => revisions.id),
     key: varchar({ length: 200 }).notNull(),
   },
   (t) => [primaryKey({ columns: [t.revisionId, t.key] }), index("revision_media_key_idx").on(t.key)],

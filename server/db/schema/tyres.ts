@@ -1,13 +1,12 @@
-import { date, double, int, mysqlEnum, mysqlTable, primaryKey, varchar } from "drizzle-orm/mysql-core";
+import { date, double, mysqlEnum, mysqlTable, primaryKey, varchar } from "drizzle-orm/mysql-core";
+import { parentId } from "./columns.ts";
 import { TYRE_POSITIONS } from "../../../shared/constants/evidence.ts";
 import { vehicles } from "./vehicles.ts";
 
 export const tyreReadings = mysqlTable(
   "tyre_readings",
   {
-    vehicleId: int()
-      .notNull()
-      .references(() => vehicles.id, { onDelete: "cascade" }),
+    vehicleId: parentId(() => vehicles.id, { onDelete: "cascade" }),
     position: mysqlEnum(TYRE_POSITIONS).notNull(),
     treadInnerMm: double(),
     treadCentreMm: double(),

@@ -1,4 +1,5 @@
-import { bigint, datetime, index, int, mysqlEnum, mysqlTable, varchar } from "drizzle-orm/mysql-core";
+import { index, mysqlEnum, mysqlTable, varchar } from "drizzle-orm/mysql-core";
+import { createdAt, logId, parentId } from "./columns.ts";
 import { VEHICLE_STATUSES } from "../../../shared/constants/vehicle.ts";
 import { vehicles } from "./vehicles.ts";
 
@@ -6,18 +7,14 @@ import { vehicles } from "./vehicles.ts";
 export const vehicleEvents = mysqlTable(
   "vehicle_events",
   {
-    id: bigint({ mode: "number", unsigned: true }).autoincrement().primaryKey(),
-    vehicleId: int()
-      .notNull()
-      .references(() => vehicles.id, { onDelete: "cascade" }),
+    id: logId(),
+    vehicleId: parentId(() => vehicles.id, { onDelete: "cascade" }),
     fromStatus: mysqlEnum(VEHICLE_STATUSES),
     toStatus: mysqlEnum(VEHICLE_STATUSES).notNull(),
     note: varchar({ length: 500 }).notNull().default(""),
     userId: varchar({ length: 255 }),
     userName: varchar({ length: 120 }),
-    at: datetime({ mode: "date", fsp: 3 })
-      .notNull()
-      .$defaultFn(() => new Date()),
+    at: createdAt(),
   },
   (t) => [index("vehicle_events_vehicle_idx").on(t.vehicleId, t.at)],
 );

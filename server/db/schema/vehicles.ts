@@ -1,19 +1,17 @@
-import { date, datetime, double, index, int, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { date, double, index, int, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import {
   ASPIRATIONS, BODY_TYPES, DISTANCE_UNITS_ENTERED, DRIVE_TYPES, FUEL_TYPES, TEST_CYCLES, TRANSMISSIONS, VEHICLE_STATUSES,
 } from "../../../shared/constants/vehicle.ts";
 import type { ServiceEntryInput } from "../../../shared/schemas/vehicles.ts";
 import type { Derived } from "../../../shared/domain/derived.ts";
-import { createdAt, jsonText, updatedAt, version } from "./columns.ts";
+import { editedRecord, instant, jsonText, parentId, serialId } from "./columns.ts";
 import { dealerships } from "./dealerships.ts";
 
 export const vehicles = mysqlTable(
   "vehicles",
   {
-    id: int().autoincrement().primaryKey(),
-    dealershipId: int()
-      .notNull()
-      .references(() => dealerships.id),
+    id: serialId(),
+    dealershipId: parentId(() => dealerships.id),
     stockNumber: varchar({ length: 20 }).notNull(),
     status: mysqlEnum(VEHICLE_STATUSES).notNull().default("intake"),
     vin: varchar({ length: 17 }),
@@ -55,7 +53,7 @@ export const vehicles = mysqlTable(
     serviceHistory: jsonText<ServiceEntryInput[]>().notNull(),
     /** The derived block as computed at the last save, for lists and feeds. */
     derived: jsonText<Derived>().notNull(),
-    stockedAt: datetime({ mode: "date", fsp: 3 }).notNull(),
+    stockedAt: instant().notNull(),
     /** Versions of the evidence sets, apart from the record's own, so the workshop and sales do not collide. */
     tyresVersion: int().notNull().default(0),
     checksVersion: int().notNull().default(0),
@@ -68,9 +66,7 @@ export const vehicles = mysqlTable(
     lastRevisionNumber: int().notNull().default(0),
     /** The last defect number issued for this vehicle. */
     lastDefectNumber: int().notNull().default(0),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...editedRecord(),
   },
   (t) => [
     uniqueIndex("vehicles_stock_number_uq").on(t.dealershipId, t.stockNumber),

@@ -1,4 +1,5 @@
-import { datetime, mysqlEnum, mysqlTable, primaryKey, int, varchar } from "drizzle-orm/mysql-core";
+import { mysqlEnum, mysqlTable, primaryKey, varchar } from "drizzle-orm/mysql-core";
+import { instant, parentId } from "./columns.ts";
 import { ZONES } from "../../../shared/constants/evidence.ts";
 import { vehicles } from "./vehicles.ts";
 
@@ -6,12 +7,10 @@ import { vehicles } from "./vehicles.ts";
 export const zoneMarks = mysqlTable(
   "zone_marks",
   {
-    vehicleId: int()
-      .notNull()
-      .references(() => vehicles.id, { onDelete: "cascade" }),
+    vehicleId: parentId(() => vehicles.id, { onDelete: "cascade" }),
     zone: mysqlEnum(ZONES).notNull(),
     checkedBy: varchar({ length: 120 }),
-    checkedAt: datetime({ mode: "date", fsp: 3 }).notNull(),
+    checkedAt: instant().notNull(),
   },
   (t) => [primaryKey({ columns: [t.vehicleId, t.zone] })],
 );

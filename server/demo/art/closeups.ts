@@ -22,12 +22,20 @@ function outsideView(svg: Svg, ctx: SceneCtx, top: number, bottom: number): void
   svg.add(`<rect y="${top}" width="${W}" height="${bottom - top}" fill="${svg.linear(0, top, 0, bottom, [[0, shade(bd.sky, -0.05)], [0.6, mix(bd.sky, "#ffffff", 0.6)], [0.62, "#9aa59c"], [1, "#a7aaa8"]])}"/>`);
 }
 
-function interiorFront(ctx: SceneCtx): string {
+/**
+ * The start of every picture taken from inside the cabin: the trim colours, the camera moved sideways by up to half
+ * of `sway` either way, and the outside seen through the glass down to `glassBottom`.
+ */
+function cabinView(ctx: SceneCtx, sway: number, glassBottom: number): { svg: Svg; t: ReturnType<typeof trimColours>; dx: number } {
   const svg = new Svg(W, H);
-  const { rnd } = ctx;
-  const t = trimColours(rnd);
-  const dx = (rnd() - 0.5) * 60;
-  outsideView(svg, ctx, 0, 560);
+  const t = trimColours(ctx.rnd);
+  const dx = (ctx.rnd() - 0.5) * sway;
+  outsideView(svg, ctx, 0, glassBottom);
+  return { svg, t, dx };
+}
+
+function interiorFront(ctx: SceneCtx): string {
+  const { svg, t, dx } = cabinView(ctx, 60, 560);
   svg.add(`<rect width="${W}" height="110" fill="${svg.linear(0, 0, 0, 110, [[0, "#8d8a85"], [1, "#b7b3ac"]])}"/>`);
   // A-pillars and the mirror.
   svg.poly([[0, 0], [230 + dx, 0], [40 + dx, 600], [0, 620]], "#3a3b3e");
@@ -95,11 +103,8 @@ function dial(svg: Svg, cx: number, cy: number, r: number, needle: number): void
 }
 
 function dashboard(ctx: SceneCtx): string {
-  const svg = new Svg(W, H);
   const { rnd } = ctx;
-  const t = trimColours(rnd);
-  const dx = (rnd() - 0.5) * 50;
-  outsideView(svg, ctx, 0, 260);
+  const { svg, t, dx } = cabinView(ctx, 50, 260);
   svg.add(`<rect y="200" width="${W}" height="${H - 200}" fill="${svg.linear(0, 200, 0, H, [[0, shade(t.dash, 0.15)], [1, shade(t.dash, -0.35)]])}"/>`);
   svg.poly(rr(130 + dx, 230, 1340, 640, 200), shade(t.dash, 0.1));
   svg.poly(rr(170 + dx, 290, 1260, 560, 170), "#050607");

@@ -31,13 +31,7 @@ export function feedsRoutes(ctx: AppContext): Router {
 
   router.post("/:id/rotate", ...route({ allow: "feeds.manage", params: idParams }, ({ user, params }) => service.rotate(ctx, user, params.id)));
 
-  router.delete(
-    "/:id",
-    ...route({ allow: "feeds.manage", params: idParams }, async ({ user, params, res }) => {
-      await service.revoke(ctx, user, params.id);
-      res.status(204).end();
-    }),
-  );
+  router.delete("/:id", ...route({ allow: "feeds.manage", params: idParams, status: 204 }, ({ user, params }) => service.revoke(ctx, user, params.id)));
 
   /** The same output a portal gets, for a signed-in person to save; not logged as a portal fetch. */
   router.get(

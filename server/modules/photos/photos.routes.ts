@@ -40,10 +40,7 @@ export function photosRoutes(ctx: AppContext): Router {
 
   router.delete(
     "/:photoId",
-    ...route({ allow: "evidence.write", params: photoParams, query: versionQuery }, async ({ user, params, query, res }) => {
-      await service.remove(ctx, user, params.id, params.photoId, query.version);
-      res.status(204).end();
-    }),
+    ...route({ allow: "evidence.write", params: photoParams, query: versionQuery, status: 204 }, ({ user, params, query }) => service.remove(ctx, user, params.id, params.photoId, query.version)),
   );
 
   return router;

@@ -28,10 +28,7 @@ export function walkaroundRoutes(ctx: AppContext): Router {
 
   router.delete(
     "/defects/:defectId",
-    ...route({ allow: "evidence.write", params: defectParams, query: versionQuery }, async ({ user, params, query, res }) => {
-      await service.deleteDefect(ctx, user, params.id, params.defectId, query.version);
-      res.status(204).end();
-    }),
+    ...route({ allow: "evidence.write", params: defectParams, query: versionQuery, status: 204 }, ({ user, params, query }) => service.deleteDefect(ctx, user, params.id, params.defectId, query.version)),
   );
 
   return router;

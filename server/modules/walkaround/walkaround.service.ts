@@ -27,6 +27,18 @@ async function pinColumns(ctx: AppContext, tx: DbOrTx, vehicleId: number, pin: C
   return { photoId: cut.photoId, pinX: pin.x, pinY: pin.y, closeupKey: cut.closeupKey };
 }
 
+/** Takes away a zone's "nothing found" mark, if it has one. */
+const clearMark = (tx: DbOrTx, vehicleId: number, zone: Zone) => tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, zone)));
+
+/** Locks the vehicle, then the defect about to change: not found unless it is this vehicle's, stale unless `version` is its own. */
+async function lockDefect(tx: DbOrTx, actor: User, vehicleId: number, defectId: number, version: number) {
+  await lockVehicle(tx, actor.dealershipId, vehicleId);
+  const [current] = await tx.select().from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.id, defectId))).for("update");
+  if (!current) throw notFound("That defect");
+  if (current.version !== version) throw staleVersion(presentDefect(current));
+  return current;
+}
+
 export async function walkaround(ctx: AppContext, actor: User, vehicleId: number) {
   const { db } = ctx.database;
   await requireVehicle(db, actor.dealershipId, vehicleId);
@@ -43,7 +55,7 @@ export async function createDefect(ctx: AppContext, actor: User, vehicleId: numb
     const { pin: _pin, ...fields } = input;
     const [res] = await tx.insert(defects).values({ ...fields, ...pin, vehicleId, number, recordedBy: actor.id });
     // A defect in a zone marked "nothing found" replaces the mark: the zone is now checked with defects.
-    await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, input.zone)));
+    await clearMark(tx, vehicleId, input.zone);
     await recordAudit(tx, actorOf(actor), { action: "defect_added", entityType: "vehicle", entityId: vehicleId, after: { number, ...fields, pinned: Boolean(input.pin) } });
     const [row] = await tx.select().from(defects).where(eq(defects.id, res.insertId));
     return presentDefect(row);
@@ -52,14 +64,11 @@ export async function createDefect(ctx: AppContext, actor: User, vehicleId: numb
 
 export async function updateDefect(ctx: AppContext, actor: User, vehicleId: number, defectId: number, input: UpdateDefectInput) {
   return ctx.database.db.transaction(async (tx) => {
-    await lockVehicle(tx, actor.dealershipId, vehicleId);
-    const [current] = await tx.select().from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.id, defectId))).for("update");
-    if (!current) throw notFound("That defect");
-    if (current.version !== input.version) throw staleVersion(presentDefect(current));
+    const current = await lockDefect(tx, actor, vehicleId, defectId, input.version);
     const { version, pin, ...fields } = input;
     const pinCols = await pinColumns(ctx, tx, vehicleId, pin);
     await tx.update(defects).set({ ...fields, ...pinCols, version: version + 1 }).where(eq(defects.id, defectId));
-    if (fields.zone) await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, fields.zone)));
+    if (fields.zone) await clearMark(tx, vehicleId, fields.zone);
     const diff = diffFields(current as unknown as Record<string, unknown>, { ...fields, ...pinCols });
     if (diff) await recordAudit(tx, actorOf(actor), { action: "defect_updated", entityType: "vehicle", entityId: vehicleId, before: { number: current.number, ...diff.before }, after: { number: current.number, ...diff.after } });
     const [row] = await tx.select().from(defects).where(eq(defects.id, defectId));
@@ -69,10 +78,7 @@ export async function updateDefect(ctx: AppContext, actor: User, vehicleId: numb
 
 export async function deleteDefect(ctx: AppContext, actor: User, vehicleId: number, defectId: number, version: number) {
   await ctx.database.db.transaction(async (tx) => {
-    await lockVehicle(tx, actor.dealershipId, vehicleId);
-    const [current] = await tx.select().from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.id, defectId))).for("update");
-    if (!current) throw notFound("That defect");
-    if (current.version !== version) throw staleVersion(presentDefect(current));
+    const current = await lockDefect(tx, actor, vehicleId, defectId, version);
     await tx.delete(defects).where(eq(defects.id, defectId));
     await recordAudit(tx, actorOf(actor), { action: "defect_removed", entityType: "vehicle", entityId: vehicleId, before: presentDefect(current), after: null });
   });
@@ -84,10 +90,10 @@ export async function markZone(ctx: AppContext, actor: User, vehicleId: number, 
     await lockVehicle(tx, actor.dealershipId, vehicleId);
     const [{ n }] = (await tx.select({ n: sql<number>`count(*)` }).from(defects).where(and(eq(defects.vehicleId, vehicleId), eq(defects.zone, zone)))) as [{ n: number }];
     if (nothingFound && Number(n) > 0) throw conflict("This zone has defects recorded, so it cannot be marked as nothing found.", undefined, "zone_has_defects");
-    await tx.delete(zoneMarks).where(and(eq(zoneMarks.vehicleId, vehicleId), eq(zoneMarks.zone, zone)));
+    await clearMark(tx, vehicleId, zone);
     if (nothingFound) await tx.insert(zoneMarks).values({ vehicleId, zone, checkedBy: actor.name, checkedAt: ctx.now() });
     await recordAudit(tx, actorOf(actor), { action: nothingFound ? "zone_checked_clear" : "zone_unchecked", entityType: "vehicle", entityId: vehicleId, after: { zone } });
-    const [rows, marks] = await Promise.all([defectsOf(tx, vehicleId), marksOf(tx, vehicleId)]);
+    const { defects: rows, marks } = await walkaroundRecordsOf(tx, vehicleId);
     return zoneStates(rows, marks);
   });
 }
