@@ -10,7 +10,7 @@ import { checkResults, defects, photos, tyreReadings, vehicles, zoneMarks } from
 import type { Storage } from "../lib/storage.ts";
 import { prepareMaster, makeCloseup } from "../modules/photos/photos.service.ts";
 import { renderDemoPhoto, ANGLE_ZONE, type Angle } from "./art/index.ts";
-import { CHECK_ITEMS, ZONES, type Zone } from "../../shared/constants/evidence.ts";
+import { CHECK_ITEMS, ZONES, type DefectKind, type RepairPlanCode, type Zone } from "../../shared/constants/evidence.ts";
 import { dayIn } from "../lib/clock.ts";
 
 /** A small deterministic generator, so the demo is the same on every machine. */
@@ -25,7 +25,10 @@ const ANGLES_BY_STATUS: Record<string, Angle[]> = {
   default: ["front_left", "side_left", "rear_right", "interior_front", "dashboard", "wheel"],
 };
 
-type DefectSeed = { zone: Zone; angle: Angle; kind: string; severity: "minor" | "moderate" | "major"; sizeMm: number; note: string; repairPlan: string; x: number; y: number; cost: number };
+type DefectSeed = {
+  zone: Zone; angle: Angle; kind: DefectKind; severity: "minor" | "moderate" | "major"; sizeMm: number; note: string; repairPlan: RepairPlanCode;
+  x: number; y: number; cost: number;
+};
 
 const DEFECT_POOL: DefectSeed[] = [
   { zone: "front", angle: "front_left", kind: "stone_chip", severity: "minor", sizeMm: 2, note: "Leading edge of the bonnet, above the grille", repairPlan: "disclosed_as_is", x: 0.42, y: 0.45, cost: 6000 },
@@ -69,7 +72,7 @@ export async function seedDemoEvidence(db: Db, storage: Storage, dealershipId: n
       const closeupKey = await makeCloseup(storage, await storage.read(p.masterKey), p.width, p.height, d.x, d.y);
       number += 1;
       await db.insert(defects).values({
-        vehicleId: v.id, number, zone: d.zone, kind: d.kind as never, severity: d.severity, sizeMm: d.sizeMm, note: d.note, repairPlan: d.repairPlan as never,
+        vehicleId: v.id, number, zone: d.zone, kind: d.kind, severity: d.severity, sizeMm: d.sizeMm, note: d.note, repairPlan: d.repairPlan,
         repairCostCents: d.cost, safetyRelevant: false, photoId: p.id, pinX: d.x, pinY: d.y, closeupKey,
       });
     }

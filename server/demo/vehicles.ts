@@ -39,7 +39,7 @@ export async function seedDemoVehicles(db: Db, dealershipId: number, now = new D
         stockNumber: String(stock),
         status: demo.status,
         odometerKmIndex: row.odometerReading,
-        derived: deriveFor(row as never, d, today),
+        derived: deriveFor(row, d, today),
         stockedAt,
         createdAt: stockedAt,
       });

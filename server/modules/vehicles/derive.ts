@@ -1,13 +1,14 @@
-import type { Dealership, Vehicle } from "../../db/schema/index.ts";
+import type { Dealership } from "../../db/schema/index.ts";
 import { vehicles } from "../../db/schema/index.ts";
 import { computeDerived, type Derived } from "../../../shared/domain/derived.ts";
-import { derivedInputOf, odometerKmOf } from "../../../shared/domain/derived-input.ts";
+import { derivedInputOf, odometerKmOf, type DerivedSource } from "../../../shared/domain/derived-input.ts";
 
 export { odometerKmOf };
 
 export type Stored = Omit<typeof vehicles.$inferInsert, "id" | "dealershipId" | "stockNumber" | "stockedAt" | "derived">;
 
-export function deriveFor(v: Pick<Vehicle, keyof Stored> & { odometerKmIndex?: number | null }, d: Dealership, today: string): Derived {
+/** The derived figures of a vehicle as stored, or of a row about to be stored (any object with the fields it reads). */
+export function deriveFor(v: DerivedSource, d: Dealership, today: string): Derived {
   return computeDerived(derivedInputOf(v), {
     today,
     checkDigitMandatory: d.vinCheckDigitMandatory,
