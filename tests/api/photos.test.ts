@@ -9,6 +9,7 @@ import { dieselSuv } from "../support/vehicles.ts";
 import { landscapeJpeg, pngDeclaring, SVG_WITH_SCRIPT } from "../support/images.ts";
 import { removeOrphans } from "../../server/modules/photos/cleanup.ts";
 import { removeIfOlder, returnIfNeeded } from "../../server/lib/storage.ts";
+import { PHOTO_LIMITS } from "../../shared/constants/evidence.ts";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -126,6 +127,18 @@ describe("POST /api/vehicles/:id/photos", () => {
     expect(res.body.error.code).toBe("too_large");
     expect(await countPhotos(v.id)).toBe(0);
   });
+
+  it("when a real 64-megapixel PNG is sent, then it is refused with the megapixel limit, not as unreadable (issue 16)", async () => {
+    // 8000×8000 of one colour: 64 MP, over PHOTO_LIMITS.maxInputPixels (50 MP), yet a few hundred kB as PNG.
+    const png = await sharp({ create: { width: 8000, height: 8000, channels: 3, background: { r: 90, g: 120, b: 140 } } }).png({ compressionLevel: 9 }).toBuffer();
+    expect(png.length).toBeLessThan(PHOTO_LIMITS.maxFileBytes);
+    const v = await newVehicle();
+    const w = await t.signIn("workshop");
+    const res = await w.post(`/api/vehicles/${v.id}/photos`).attach("photos", png, { filename: "big.png", contentType: "image/png" });
+    expect(res.status).toBe(415);
+    expect(res.body.error.message).toBe("The photo is 8000×8000 pixels; the most accepted is 50 megapixels.");
+    expect(await countPhotos(v.id)).toBe(0);
+  }, 30_000);
 
   it("when the field name is wrong or no file is sent, then 400", async () => {
     const v = await newVehicle();

@@ -52,7 +52,9 @@ async function prepareMasterNow(input: Buffer): Promise<Master> {
   if (input.length === 0) throw refuse("The file is empty.");
   let meta: Metadata;
   try {
-    meta = await sharp(input, { limitInputPixels: PHOTO_LIMITS.maxInputPixels }).metadata();
+    // metadata() reads the header without decoding, so no pixel limit here: with one, a 64 MP photo threw before
+    // the size check below could say why it is refused (issue 16). The decode further down keeps the limit.
+    meta = await sharp(input, { limitInputPixels: false }).metadata();
   } catch {
     throw refuse("This file is not a photo Forthright can read. Use JPEG, PNG, WebP or AVIF.");
   }
