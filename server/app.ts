@@ -17,7 +17,8 @@ import { vehiclesRoutes } from "./modules/vehicles/vehicles.routes.ts";
 import { photosRoutes } from "./modules/photos/photos.routes.ts";
 import { walkaroundRoutes } from "./modules/walkaround/walkaround.routes.ts";
 import { checksRoutes } from "./modules/checks/checks.routes.ts";
-import { publishingRoutes, publicVehiclesRoutes } from "./modules/publishing/publishing.routes.ts";
+import { publishingRoutes, publicVehiclesRoutes, vehicleDetailRoutes } from "./modules/publishing/publishing.routes.ts";
+import { conditionRoutes } from "./modules/condition/condition.routes.ts";
 import { enquiryRoutes, leadsRoutes, shareRoutes } from "./modules/leads/leads.routes.ts";
 import { mailRoutes } from "./modules/mail/mail.routes.ts";
 import { feedsRoutes } from "./modules/feeds/feeds.routes.ts";
@@ -91,8 +92,10 @@ export function createApp(ctx: AppContext): Express {
   api.use("/users", usersRoutes(ctx));
   api.use("/dealership", dealershipRoutes(ctx));
   api.use("/vehicles/:id/photos", photosRoutes(ctx));
-  api.use("/vehicles/:id", walkaroundRoutes(ctx), checksRoutes(ctx), publishingRoutes(ctx), shareRoutes(ctx));
+  api.use("/vehicles/:id", walkaroundRoutes(ctx), checksRoutes(ctx), conditionRoutes(ctx), publishingRoutes(ctx), shareRoutes(ctx));
   api.use("/vehicles", vehiclesRoutes(ctx));
+  // After /vehicles: mounted before it, its GET / would take /vehicles/suggestions for a vehicle's id.
+  api.use("/vehicles/:id", vehicleDetailRoutes(ctx));
   api.use("/public/dealership", publicDealershipRoutes(ctx));
   api.use("/public/vehicles", publicVehiclesRoutes(ctx), enquiryRoutes(ctx));
   api.use("/leads", leadsRoutes(ctx));

@@ -66,14 +66,14 @@ describe("readiness and publishing", () => {
 describe("the public side reads only revisions", () => {
   it("when a published vehicle is edited, then the public page does not change until the next publish, which says what changed", async () => {
     const { vehicleId, slug, sales } = await publishReadyVehicle(t);
-    let v = (await sales.get(`/api/vehicles/${vehicleId}`)).body.vehicle;
+    const v = (await sales.get(`/api/vehicles/${vehicleId}`)).body.vehicle;
     await sales.patch(`/api/vehicles/${vehicleId}`).send({ version: v.version, priceCents: 3_299_000, odometerKm: 84_400, powerKw: 150 });
     const before = await request(t.app).get(`/api/public/vehicles/${slug}`);
     expect(before.body.vehicle.snapshot.priceCents).toBe(3_499_000);
     const w = await t.signIn("workshop");
-    v = (await sales.get(`/api/vehicles/${vehicleId}`)).body.vehicle;
+    const evidence = (await sales.get(`/api/vehicles/${vehicleId}/evidence`)).body.evidence;
     const dent = await w.post(`/api/vehicles/${vehicleId}/defects`).send({ zone: "rear", kind: "dent", severity: "moderate", sizeMm: 18, note: "Tailgate", repairPlan: "to_be_repaired" });
-    const scratch = v.evidence.defects[0];
+    const scratch = evidence.defects[0];
     await w.patch(`/api/vehicles/${vehicleId}/defects/${scratch.id}`).send({ version: scratch.version, repairPlan: "repaired_before_sale" });
     const second = await sales.post(`/api/vehicles/${vehicleId}/publish`).send({});
     expect(second.status).toBe(201);

@@ -164,16 +164,16 @@ describe("tyres and checks", () => {
     expect((await m.put(`/api/vehicles/${v.id}/tyres`).send({ version: 0, measuredOn: "2025-06-20", readings: [] })).status).toBe(403);
   });
 
-  it("when the vehicle is read, then its evidence and condition index come with it, and adding a defect never raises the index", async () => {
+  it("when the vehicle's evidence is read, then its condition index comes with it, and adding a defect never raises the index", async () => {
     const { v, w, photo } = await vehicleWithPhoto();
     await w.put(`/api/vehicles/${v.id}/tyres`).send({ version: 0, measuredOn: "2025-06-20", readings: tyres().slice(0, 2) });
     await w.put(`/api/vehicles/${v.id}/checks`).send({ version: 0, results: [{ item: "brakes", result: "pass" }] });
-    const before = (await w.get(`/api/vehicles/${v.id}`)).body.vehicle.evidence;
+    const before = (await w.get(`/api/vehicles/${v.id}/evidence`)).body.evidence;
     expect(before.photos).toHaveLength(1);
     expect(before.condition.index).toBeGreaterThan(0);
     expect(before.condition.explanation.length).toBeGreaterThan(2);
     await w.post(`/api/vehicles/${v.id}/defects`).send(defect({ pin: { photoId: photo.id, x: 0.5, y: 0.5 } }));
-    const after = (await w.get(`/api/vehicles/${v.id}`)).body.vehicle.evidence;
+    const after = (await w.get(`/api/vehicles/${v.id}/evidence`)).body.evidence;
     expect(after.condition.index).toBeLessThan(before.condition.index);
     expect(after.condition.summary.sentence).toBe("1 item noted, none affecting safety.");
   });

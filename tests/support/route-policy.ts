@@ -58,6 +58,7 @@ export const ROUTE_POLICY: Record<string, Allow> = {
   "GET /api/vehicles/suggestions": "vehicles.read",
   "POST /api/vehicles": "vehicle.create",
   "GET /api/vehicles/:id": "vehicles.read",
+  "GET /api/vehicles/:id/evidence": "vehicles.read",
   "GET /api/vehicles/:id/history": "vehicles.read",
   // Every staff role may save a vehicle; which fields each may change is checked inside (403 forbidden_fields).
   "PATCH /api/vehicles/:id": "vehicle.edit",

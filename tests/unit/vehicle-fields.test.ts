@@ -17,7 +17,7 @@ import { describeChanges } from "../../shared/domain/revision-changes.ts";
 import { computeDerived } from "../../shared/domain/derived.ts";
 import { vehicles, type Dealership, type Vehicle } from "../../server/db/schema/index.ts";
 import { buildSnapshot } from "../../server/modules/publishing/snapshot.ts";
-import type { Evidence } from "../../server/modules/condition/condition.service.ts";
+import type { Evidence } from "../../server/modules/condition/condition.presenter.ts";
 import { Specifications } from "../../src/features/storefront/components/condition/Specifications.tsx";
 
 const spec = (f: string) => (VEHICLE_FIELDS as Record<string, FieldSpec>)[f];

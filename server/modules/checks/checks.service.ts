@@ -13,9 +13,6 @@ import { checksOf, tyresOf } from "./checks.queries.ts";
 import { presentChecks, type ChecksView } from "./checks.presenter.ts";
 import type { DealershipDay } from "../../lib/clock.ts";
 
-// The client still imports this type from here; it lives in checks.presenter.ts.
-export type { presentChecks };
-
 /** The front door for other modules: a vehicle's tyres and checks as presented, read with the caller's db or tx. */
 export async function checksFor(db: DbOrTx, d: Pick<Dealership, "legalMinTreadMm" | "newTyreTreadMm">, v: { id: number; tyresVersion: number; checksVersion: number }): Promise<ChecksView> {
   const [tyres, checks] = await Promise.all([tyresOf(db, v.id), checksOf(db, v.id)]);

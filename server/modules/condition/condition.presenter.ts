@@ -11,7 +11,11 @@ import type { ChecksView } from "../checks/checks.presenter.ts";
 export function presentEvidence(photos: PhotoView[], defectRows: Defect[], marks: Parameters<typeof zoneStates>[1], checkSet: ChecksView) {
   const index = conditionIndex({
     defects: defectRows,
-    tyres: checkSet.tyres.readings.map((r) => ({ position: r.reading.position, treadVerdict: r.assessment.tread?.verdict ?? null, ageYears: r.assessment.ageYears })),
+    tyres: checkSet.tyres.readings.map((r) => ({
+      position: r.reading.position,
+      treadVerdict: r.assessment.tread?.verdict ?? null,
+      ageYears: r.assessment.ageYears,
+    })),
     checks: checkSet.checks.results,
   });
   return {

@@ -10,11 +10,8 @@ import { enqueueMail } from "../mail/outbox.ts";
 import { requireVehicle } from "../vehicles/vehicles.service.ts";
 import { enquiryConfirmation, enquiryToStaff, leadReply, shareMail, type EnquiryMailData } from "../mail/templates.ts";
 import { MIN_FILL_MS, CONTACT_LABELS, LEAD_STATUS_LABELS } from "../../../shared/constants/leads.ts";
-import { presentLeadCounts, presentLeadDetail, presentLeadRow, type LeadCounts, type LeadDetail, type presentLead } from "./leads.presenter.ts";
+import { presentLeadCounts, presentLeadDetail, presentLeadRow, type LeadCounts, type LeadDetail } from "./leads.presenter.ts";
 import { leadsWithVehicle } from "./leads.queries.ts";
-
-// The client still imports this type from here; it lives in leads.presenter.ts.
-export type { presentLead };
 import type { EnquiryInput, LeadListQuery, UpdateLeadInput } from "../../../shared/schemas/enquiries.ts";
 
 /**

@@ -2,16 +2,28 @@ import type { Photo } from "../../db/schema/index.ts";
 
 export const mediaUrl = (key: string) => `/media/${key}`;
 
+/** Only finished photos are shown to buyers: a revision must never point at sizes still being made. */
+export const shownPublicly = (p: Pick<Photo, "status">) => p.status === "ready";
+
+const bySizeOf = (p: Photo) => [...p.variants].sort((a, b) => a.width - b.width);
+
+/** The file behind `src`: the JPEG size nearest 1000 px wide, or the master while no JPEG size exists yet. */
+function fallbackKeyOf(p: Photo, bySize = bySizeOf(p)) {
+  const jpegs = bySize.filter((v) => v.format === "jpeg");
+  return (jpegs.find((v) => v.width >= 1000) ?? jpegs.at(-1))?.key ?? p.masterKey;
+}
+
+/** The storage keys of every file a presented photo points at in `src` and its srcsets (what a revision must keep). */
+export const servedKeysOf = (p: Photo) => [...new Set([fallbackKeyOf(p), ...p.variants.map((v) => v.key)])];
+
 /** A photo as the pages use it: a fallback src, srcsets per format, its size and placeholder. */
 export function presentPhoto(p: Photo) {
-  const bySize = [...p.variants].sort((a, b) => a.width - b.width);
+  const bySize = bySizeOf(p);
   const srcset = (format: string) =>
     bySize
       .filter((v) => v.format === format)
       .map((v) => `${mediaUrl(v.key)} ${v.width}w`)
       .join(", ");
-  const jpegs = bySize.filter((v) => v.format === "jpeg");
-  const fallback = jpegs.find((v) => v.width >= 1000) ?? jpegs[jpegs.length - 1];
   return {
     id: p.id,
     status: p.status,
@@ -22,7 +34,7 @@ export function presentPhoto(p: Photo) {
     width: p.width,
     height: p.height,
     placeholder: p.placeholder,
-    src: fallback ? mediaUrl(fallback.key) : mediaUrl(p.masterKey),
+    src: mediaUrl(fallbackKeyOf(p, bySize)),
     srcsetAvif: srcset("avif"),
     srcsetWebp: srcset("webp"),
     srcsetJpeg: srcset("jpeg"),

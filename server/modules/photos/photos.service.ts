@@ -10,20 +10,22 @@ import { PHOTO_LIMITS } from "../../../shared/constants/evidence.ts";
 import { lockVehicle, requireVehicle as vehicleOf } from "../vehicles/vehicles.service.ts";
 import { makeCloseup, makeVariants, prepareMaster } from "./photo-pipeline.ts";
 import { findPhoto, photoCount, photosOf } from "./photos.queries.ts";
-import { presentPhoto, type PhotoView, type Refusal } from "./photos.presenter.ts";
+import { presentPhoto, servedKeysOf, shownPublicly, type PhotoView, type Refusal } from "./photos.presenter.ts";
 
 export interface UploadedFile {
   originalname: string;
   buffer: Buffer;
 }
 
-export type { Refusal };
-
 const requireVehicle = (ctx: AppContext, actor: User, vehicleId: number) => vehicleOf(ctx.database.db, actor.dealershipId, vehicleId);
 
-/** The front door for other modules: a vehicle's photos as presented, in order, read with the caller's db or tx. */
-export async function photoViewsOf(db: DbOrTx, vehicleId: number): Promise<PhotoView[]> {
-  return (await photosOf(db, vehicleId)).map(presentPhoto);
+/**
+ * The front door for other modules: a vehicle's photos as presented, in order, and the storage keys of the files the
+ * public may be shown (the served sizes of finished photos), both from the same rows, read with the caller's db or tx.
+ */
+export async function photoViewsOf(db: DbOrTx, vehicleId: number): Promise<{ views: PhotoView[]; publicKeys: string[] }> {
+  const rows = await photosOf(db, vehicleId);
+  return { views: rows.map(presentPhoto), publicKeys: rows.filter(shownPublicly).flatMap(servedKeysOf) };
 }
 
 /**
@@ -92,7 +94,7 @@ export async function upload(ctx: AppContext, actor: User, vehicleId: number, fi
         uploadedBy: actor.id,
       });
       await recordAudit(tx, actorOf(actor), { action: "photo_added", entityType: "vehicle", entityId: vehicleId, after: { photoId: res.insertId, name: file.originalname.slice(0, 120) } });
-      return (await findPhoto(tx, vehicleId, res.insertId))!;
+      return await findPhoto(tx, vehicleId, res.insertId);
     });
     if (!row) {
       refused.push({ name: file.originalname, status: 409, code: "too_many_photos", reason: `This vehicle already has ${PHOTO_LIMITS.maxPhotosPerVehicle} photos, the most allowed. Delete some first.` });
@@ -104,7 +106,14 @@ export async function upload(ctx: AppContext, actor: User, vehicleId: number, fi
   return { accepted, refused };
 }
 
-export async function update(ctx: AppContext, actor: User, vehicleId: number, photoId: number, input: { version: number; caption?: string; zone?: string | null; isCover?: true }) {
+export interface PhotoChanges {
+  version: number;
+  caption?: string;
+  zone?: string | null;
+  isCover?: true;
+}
+
+export async function update(ctx: AppContext, actor: User, vehicleId: number, photoId: number, input: PhotoChanges) {
   await requireVehicle(ctx, actor, vehicleId);
   return ctx.database.db.transaction(async (tx) => {
     const current = await findPhoto(tx, vehicleId, photoId, true);
@@ -117,8 +126,14 @@ export async function update(ctx: AppContext, actor: User, vehicleId: number, ph
       ...(input.isCover ? { isCover: true } : {}),
     };
     await tx.update(photos).set({ ...set, version: current.version + 1 }).where(eq(photos.id, photoId));
-    await recordAudit(tx, actorOf(actor), { action: "photo_updated", entityType: "vehicle", entityId: vehicleId, before: { photoId, caption: current.caption, zone: current.zone, isCover: current.isCover }, after: { photoId, ...set } });
-    return presentPhoto((await findPhoto(tx, vehicleId, photoId))!);
+    await recordAudit(tx, actorOf(actor), {
+      action: "photo_updated",
+      entityType: "vehicle",
+      entityId: vehicleId,
+      before: { photoId, caption: current.caption, zone: current.zone, isCover: current.isCover },
+      after: { photoId, ...set },
+    });
+    return presentPhoto(await findPhoto(tx, vehicleId, photoId));
   });
 }
 

@@ -1,6 +1,5 @@
 import type { Vehicle } from "../../db/schema/index.ts";
 import type { Readiness } from "../../../shared/domain/readiness.ts";
-import type { Evidence } from "../condition/condition.presenter.ts";
 import type { VehicleRecord } from "../vehicles/vehicles.presenter.ts";
 
 export const publicUrlOf = (publicUrl: string, slug: string) => `${publicUrl}/vehicles/${slug}`;
@@ -22,7 +21,11 @@ export function presentPublishing(
 export type PublishingView = ReturnType<typeof presentPublishing>;
 
 /** POST /api/vehicles/:id/publish (201): the revision just written and where buyers read it. */
-export function presentPublishResult(revision: { number: number; publishedAt: Date; changes: string[]; overrideReason: string | null }, slug: string, publicUrl: string) {
+export function presentPublishResult(
+  revision: { number: number; publishedAt: Date; changes: string[]; overrideReason: string | null },
+  slug: string,
+  publicUrl: string,
+) {
   return {
     revision: { number: revision.number, publishedAt: revision.publishedAt.toISOString(), changes: revision.changes, overrideReason: revision.overrideReason },
     slug,
@@ -32,12 +35,12 @@ export function presentPublishResult(revision: { number: number; publishedAt: Da
 export type PublishResult = ReturnType<typeof presentPublishResult>;
 
 /**
- * GET /api/vehicles/:id (inside `{ vehicle }`): the record with its evidence, readiness and publishing. Composed here,
- * in the module that depends on vehicles and condition, so neither of them calls back up.
+ * GET /api/vehicles/:id (inside `{ vehicle }`): the record with its readiness and publishing, what the page's header
+ * and side panel show. The evidence is its own answer (condition.presenter.ts, GET /api/vehicles/:id/evidence), so a
+ * field save and an evidence save each re-read only their own part.
  */
-export const presentVehicleDetail = (record: VehicleRecord, evidence: Evidence, publishing: PublishingView) => ({
+export const presentVehicleDetail = (record: VehicleRecord, publishing: PublishingView) => ({
   ...record,
-  evidence,
   readiness: publishing.readiness,
   publishing,
 });

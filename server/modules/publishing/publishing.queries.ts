@@ -10,7 +10,13 @@ export async function latestRevision(db: DbOrTx, vehicleId: number) {
 /** Every revision of a vehicle, newest first, with who published it (no snapshots: they are large). */
 export const revisionsOf = (db: DbOrTx, vehicleId: number) =>
   db
-    .select({ number: revisions.number, publishedAt: revisions.publishedAt, publishedByName: revisions.publishedByName, overrideReason: revisions.overrideReason, changes: revisions.changes })
+    .select({
+      number: revisions.number,
+      publishedAt: revisions.publishedAt,
+      publishedByName: revisions.publishedByName,
+      overrideReason: revisions.overrideReason,
+      changes: revisions.changes,
+    })
     .from(revisions)
     .where(eq(revisions.vehicleId, vehicleId))
     .orderBy(desc(revisions.number));

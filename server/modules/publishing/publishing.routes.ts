@@ -5,7 +5,7 @@ import { route } from "../../middleware/route.ts";
 import { revisionParams, slugParams, vehicleIdParams } from "../../../shared/schemas/common.ts";
 import { publishSchema } from "../../../shared/schemas/publishing.ts";
 import { publicListQuerySchema } from "../../../shared/schemas/public-query.ts";
-import { publish } from "./publishing.service.ts";
+import { publish, vehicleDetail } from "./publishing.service.ts";
 import { assertPublic, listPublic, publicVehicleJson, urlFor } from "./public.service.ts";
 import { sendRepresentation } from "./public-cache.ts";
 
@@ -13,6 +13,17 @@ import { sendRepresentation } from "./public-cache.ts";
 export function publishingRoutes(ctx: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.post("/publish", ...route({ allow: "vehicle.publish", params: vehicleIdParams, body: publishSchema, status: 201 }, ({ user, params, body }) => publish(ctx, user, params.id, body)));
+  return router;
+}
+
+/**
+ * GET /api/vehicles/:id: the record with readiness and publishing. Mounted at /api/vehicles/:id after the vehicles
+ * router (server/app.ts), so /api/vehicles/suggestions is answered there before this could take it for an id; served
+ * from this module because the answer needs readiness, and vehicles must not depend on publishing.
+ */
+export function vehicleDetailRoutes(ctx: AppContext): Router {
+  const router = Router({ mergeParams: true });
+  router.get("/", ...route({ allow: "vehicles.read", params: vehicleIdParams }, async ({ user, params, day }) => ({ vehicle: await vehicleDetail(ctx, user, params.id, day) })));
   return router;
 }
 

@@ -1,22 +1,22 @@
 import { eq } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
-import type { DbOrTx } from "../../db/client.ts";
 import { revisionMedia, revisions, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
 import { AppError, conflict, forbidden, staleVersion } from "../../lib/errors.ts";
 import { actorOf, recordAudit } from "../audit/audit.service.ts";
 import { getDealership, todayFor } from "../dealerships/dealerships.service.ts";
-import { evidenceOf } from "../condition/condition.service.ts";
+import { evidenceOf, evidenceWithMediaOf } from "../condition/condition.service.ts";
 import type { Evidence } from "../condition/condition.presenter.ts";
 import { deriveFor, lockVehicle, recordView, requireVehicle } from "../vehicles/vehicles.service.ts";
+import type { DealershipDay } from "../../lib/clock.ts";
 import { readiness, type Readiness } from "../../../shared/domain/readiness.ts";
 import { validateVinStructure, vinCheck } from "../../../shared/domain/vin.ts";
 import { ROAD_POSITIONS } from "../../../shared/domain/tyre-assessment.ts";
 import { describeChanges } from "../../../shared/domain/revision-changes.ts";
 import type { VehicleStatus } from "../../../shared/constants/vehicle.ts";
-import { buildSnapshot, mediaKeysOf } from "./snapshot.ts";
+import { buildSnapshot } from "./snapshot.ts";
 import { latestRevision, revisionsOf } from "./publishing.queries.ts";
-import { presentPublishing, presentPublishResult, presentVehicleDetail, type PublishingView } from "./publishing.presenter.ts";
+import { presentPublishing, presentPublishResult, presentVehicleDetail, type VehicleDetail } from "./publishing.presenter.ts";
 
 const PUBLISHABLE_FROM: readonly VehicleStatus[] = ["preparing", "live", "reserved", "withdrawn"];
 
@@ -63,7 +63,7 @@ export async function publish(ctx: AppContext, actor: User, vehicleId: number, i
       throw conflict(`A vehicle that is ${v.status} cannot be published. ${v.status === "intake" ? "Start preparing it first." : ""}`.trim(), { status: v.status }, "illegal_move");
     }
     const d = await getDealership(tx, actor.dealershipId);
-    const evidence = await evidenceOf(tx, d, v);
+    const { evidence, mediaKeys } = await evidenceWithMediaOf(tx, d, v);
     const ready = readinessOf(v, d, evidence);
     let overrideReason: string | null = null;
     if (!ready.ready) {
@@ -89,8 +89,7 @@ export async function publish(ctx: AppContext, actor: User, vehicleId: number, i
       title: snapshot.title, make: v.make, model: v.model, bodyType: v.bodyType, fuelType: v.fuelType, priceCents: v.priceCents,
       odometerKm: v.odometerKmIndex, buildYear: v.buildYear, conditionIndex: snapshot.condition.index,
     });
-    const keys = mediaKeysOf(snapshot);
-    if (keys.length) await tx.insert(revisionMedia).values(keys.map((key) => ({ revisionId: res.insertId, key })));
+    if (mediaKeys.length) await tx.insert(revisionMedia).values(mediaKeys.map((key) => ({ revisionId: res.insertId, key })));
     const goesLive = v.status === "preparing" || v.status === "withdrawn";
     await tx
       .update(vehicles)
@@ -109,20 +108,16 @@ export async function publish(ctx: AppContext, actor: User, vehicleId: number, i
   });
 }
 
-/** The staff view of a vehicle's publishing: readiness now, and every revision with who published it. */
-export async function publishingOf(db: DbOrTx, v: Vehicle, d: Dealership, evidence: Evidence, publicUrl: string): Promise<PublishingView> {
-  return presentPublishing(v, readinessOf(v, d, evidence), await revisionsOf(db, v.id), publicUrl);
-}
-
 /**
- * GET /api/vehicles/:id: the record, its evidence, readiness and revisions. Composed here because publishing already
- * depends on vehicles and condition; the vehicles module answers the record alone (vehicles.service.ts get).
+ * GET /api/vehicles/:id: the record, its readiness and its publishing (revisions), for the page's header and side
+ * panel; the evidence itself is GET /api/vehicles/:id/evidence (condition module). Composed here because publishing
+ * already depends on vehicles and condition, so neither calls back up. Readiness reads every evidence table, as the
+ * publish does, so the two never disagree; the reads run side by side, and before a first publish there are no
+ * revisions to read.
  */
-export async function vehicleDetail(ctx: AppContext, actor: User, id: number) {
+export async function vehicleDetail(ctx: AppContext, actor: User, id: number, day: () => Promise<DealershipDay>): Promise<VehicleDetail> {
   const { db } = ctx.database;
-  const v = await requireVehicle(db, actor.dealershipId, id);
-  const d = await getDealership(db, actor.dealershipId);
-  const evidence = await evidenceOf(db, d, v);
-  const publishing = await publishingOf(db, v, d, evidence, ctx.config.publicUrl);
-  return presentVehicleDetail(recordView(ctx, v, d), evidence, publishing);
+  const [v, { dealership: d }] = await Promise.all([requireVehicle(db, actor.dealershipId, id), day()]);
+  const [evidence, published] = await Promise.all([evidenceOf(db, d, v), v.lastRevisionNumber ? revisionsOf(db, v.id) : []]);
+  return presentVehicleDetail(recordView(ctx, v, d), presentPublishing(v, readinessOf(v, d, evidence), published, ctx.config.publicUrl));
 }

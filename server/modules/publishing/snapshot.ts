@@ -4,8 +4,12 @@ import type { PublicSnapshot } from "../../../shared/schemas/public.ts";
 import { renderMarkdown } from "../../../shared/markdown.ts";
 import { presentPublicDealership } from "../dealerships/dealerships.presenter.ts";
 import type { Evidence } from "../condition/condition.presenter.ts";
+import { shownPublicly } from "../photos/photos.presenter.ts";
 
-/** Media keys behind the /media/ URLs a snapshot shows, so the clean-up keeps their files. */
+/**
+ * Media keys behind the /media/ URLs a snapshot shows, read back out of them. A publish records its keys from the rows
+ * instead (condition.service.ts evidenceWithMediaOf); this independent reading is what the crash test checks them by.
+ */
 export function mediaKeysOf(snapshot: PublicSnapshot): string[] {
   const urls = [
     ...snapshot.photos.flatMap((p) => [p.src, ...[p.srcsetAvif, p.srcsetWebp, p.srcsetJpeg].flatMap((s) => (s ? s.split(", ").map((x) => x.split(" ")[0]) : []))]),
@@ -21,7 +25,7 @@ const latest = (dates: Array<string | null | undefined>) => dates.filter((d): d 
  * says to buyers, no audit, no plate.
  */
 export function buildSnapshot(v: Vehicle, derived: Derived, evidence: Evidence, d: Dealership): PublicSnapshot {
-  const photos = evidence.photos.filter((p) => p.status === "ready");
+  const photos = evidence.photos.filter(shownPublicly);
   const indexOf = new Map(photos.map((p, i) => [p.id, i]));
   const tyreDates = evidence.tyres.readings.map((r) => r.measuredOn);
   const checkDates = evidence.checks.results.map((c) => c.checkedOn);

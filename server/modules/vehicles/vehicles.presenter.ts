@@ -7,7 +7,10 @@ import { wholeDaysBetween } from "../../lib/clock.ts";
 const fieldsOf = (v: Vehicle) =>
   Object.fromEntries(STORED_FIELD_NAMES.map((f) => [f, v[f]])) as { [K in (typeof STORED_FIELD_NAMES)[number]]: Vehicle[K] };
 
-/** The staff view of a vehicle: every input field by name, the derived block, and bookkeeping. */
+/**
+ * The staff view of a vehicle's record, as every write returns it: every input field by name, the derived block, and
+ * bookkeeping (GET /api/vehicles/:id adds readiness and publishing: publishing.presenter.ts VehicleDetail).
+ */
 export function presentVehicle(v: Vehicle, derived: Derived, now: Date) {
   return {
     id: v.id,
@@ -23,7 +26,7 @@ export function presentVehicle(v: Vehicle, derived: Derived, now: Date) {
     version: v.version,
   };
 }
-export type VehicleView = ReturnType<typeof presentVehicle>;
+export type VehicleRecord = ReturnType<typeof presentVehicle>;
 
 /** One row of the stock table. */
 export function presentVehicleRow(v: Vehicle, now: Date) {
@@ -52,9 +55,6 @@ export function presentVehicleRow(v: Vehicle, now: Date) {
   };
 }
 export type VehicleRow = ReturnType<typeof presentVehicleRow>;
-
-/** The record as a write returns it (the detail read adds evidence, readiness and publishing: publishing.presenter.ts). */
-export type VehicleRecord = VehicleView;
 
 /** GET /api/vehicles: one page of the stock table. */
 export function presentVehicleList(page: { rows: Vehicle[]; total: number; page: number; pageSize: number }, now: Date) {

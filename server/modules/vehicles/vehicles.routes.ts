@@ -4,7 +4,6 @@ import { route } from "../../middleware/route.ts";
 import { vehicleIdParams } from "../../../shared/schemas/common.ts";
 import { createVehicleSchema, statusMoveSchema, updateVehicleSchema, vehicleListQuerySchema, vehicleSuggestionsQuerySchema } from "../../../shared/schemas/vehicles.ts";
 import * as service from "./vehicles.service.ts";
-import { vehicleDetail } from "../publishing/publishing.service.ts";
 
 export function vehiclesRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -20,8 +19,6 @@ export function vehiclesRoutes(ctx: AppContext): Router {
       vehicle: await service.create(ctx, user, body, await day()),
     })),
   );
-
-  router.get("/:id", ...route({ allow: "vehicles.read", params: vehicleIdParams }, async ({ user, params }) => ({ vehicle: await vehicleDetail(ctx, user, params.id) })));
 
   router.get("/:id/history", ...route({ allow: "vehicles.read", params: vehicleIdParams }, ({ user, params }) => service.history(ctx, user, params.id)));
 

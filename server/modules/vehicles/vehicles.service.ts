@@ -63,7 +63,7 @@ function enforceVin(vin: string | null | undefined, d: Dealership) {
 async function nextStockNumber(tx: DbOrTx, dealershipId: number): Promise<string> {
   await tx.update(dealerships).set({ lastStockNumber: sql`${dealerships.lastStockNumber} + 1` }).where(eq(dealerships.id, dealershipId));
   const [row] = await tx.select({ n: dealerships.lastStockNumber }).from(dealerships).where(eq(dealerships.id, dealershipId));
-  return String(row!.n);
+  return String(row.n);
 }
 
 export async function list(ctx: AppContext, actor: User, query: VehicleListQuery) {
@@ -72,8 +72,9 @@ export async function list(ctx: AppContext, actor: User, query: VehicleListQuery
 
 /**
  * The staff view of a vehicle row with its derived figures as of the dealership's today: recomputed on every read,
- * since "overdue" depends on today, not on the day of the last save. The detail read (record, evidence, readiness,
- * revisions) is composed by the publishing module, which depends on this one: publishing.service.ts vehicleDetail.
+ * since "overdue" depends on today, not on the day of the last save. GET /api/vehicles/:id (the record with readiness
+ * and revisions) is served by the publishing module, which depends on this one (publishing.service.ts vehicleDetail),
+ * and the evidence by the condition module; this module calls neither.
  */
 export const recordView = (ctx: AppContext, v: Vehicle, d: Dealership) => presentVehicle(v, deriveFor(v, d, todayFor(ctx, d)), ctx.now());
 
@@ -99,7 +100,7 @@ export async function create(ctx: AppContext, actor: User, input: CreateVehicleI
       make: input.make!,
       model: input.model!,
     } as Stored & { make: string; model: string };
-    const derived = deriveFor(base as never, d, day.today);
+    const derived = deriveFor(base, d, day.today);
     const [result] = await tx.insert(vehicles).values({
       ...base,
       dealershipId: d.id,
@@ -113,7 +114,7 @@ export async function create(ctx: AppContext, actor: User, input: CreateVehicleI
     const id = result.insertId;
     await tx.insert(vehicleEvents).values({ vehicleId: id, fromStatus: null, toStatus: "intake", note: "Taken into stock", userId: actor.id, userName: actor.name });
     await recordAudit(tx, actorOf(actor), { action: "vehicle_created", entityType: "vehicle", entityId: id, after: { stockNumber, ...columns } });
-    const row = (await findVehicle(tx, d.id, id))!;
+    const row = await findVehicle(tx, d.id, id);
     return presentVehicle(row, derived, ctx.now());
   });
 }
@@ -138,7 +139,7 @@ export async function update(ctx: AppContext, actor: User, id: number, input: Up
       .where(eq(vehicles.id, id));
     const diff = diffFields(current as unknown as Record<string, unknown>, columns as Record<string, unknown>);
     if (diff) await recordAudit(tx, actorOf(actor), { action: "vehicle_updated", entityType: "vehicle", entityId: id, ...diff });
-    const row = (await findVehicle(tx, d.id, id))!;
+    const row = await findVehicle(tx, d.id, id);
     return presentVehicle(row, derived, ctx.now());
   });
 }
@@ -156,7 +157,7 @@ export async function moveStatus(ctx: AppContext, actor: User, id: number, input
     await tx.update(vehicles).set({ status: input.to, version: current.version + 1 }).where(eq(vehicles.id, id));
     await tx.insert(vehicleEvents).values({ vehicleId: id, fromStatus: current.status, toStatus: input.to, note: input.note ?? "", userId: actor.id, userName: actor.name });
     await recordAudit(tx, actorOf(actor), { action: "status_moved", entityType: "vehicle", entityId: id, before: { status: current.status }, after: { status: input.to, note: input.note ?? null } });
-    return recordView(ctx, (await findVehicle(tx, d.id, id))!, d);
+    return recordView(ctx, await findVehicle(tx, d.id, id), d);
   });
 }
 

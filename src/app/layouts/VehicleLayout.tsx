@@ -2,7 +2,9 @@ import { Link, NavLink, Outlet, useOutletContext, useParams } from "react-router
 import { useStaffUser } from "../RequireAction.tsx";
 import { can } from "../../../shared/permissions.ts";
 import { useDealership, type DealershipView } from "../../features/settings/api/dealership.ts";
-import { useVehicle, type VehicleView } from "../../features/vehicles/api/vehicles.ts";
+import { useVehicle, type VehicleDetail } from "../../features/vehicles/api/vehicles.ts";
+import { useVehicleEvidence } from "../../features/vehicles/api/evidence.ts";
+import { usePhotos } from "../../features/photos/api/photos.ts";
 import { StatusActions } from "../../features/vehicles/components/StatusActions.tsx";
 import { StatusBadge } from "../../features/vehicles/components/StatusBadge.tsx";
 import { PublishPanel } from "../../features/publishing/components/PublishPanel.tsx";
@@ -13,13 +15,14 @@ import { Panel } from "../../components/ui/Page.tsx";
 import { Loading, Notice } from "../../components/feedback/Notice.tsx";
 import type { SessionUser } from "../../../shared/schemas/auth.ts";
 
+/** The detail only (record, readiness, publishing): a page that shows evidence or photos reads their own caches. */
 export interface VehicleContext {
-  vehicle: VehicleView;
+  vehicle: VehicleDetail;
   dealership: DealershipView;
   user: SessionUser;
 }
 
-/** The pages of one vehicle share its header, status and condition summary; each reads them from this context. */
+/** The pages of one vehicle share its header, status and side panel; each reads the vehicle from this context. */
 export const useVehicleContext = () => useOutletContext<VehicleContext>();
 
 const TABS = [
@@ -33,7 +36,10 @@ export default function VehicleLayout() {
   const { id } = useParams();
   const vehicleId = Number(id);
   const user = useStaffUser();
+  // The three reads start together; the page waits for the record only, the panels fill in as the rest arrive.
   const v = useVehicle(vehicleId);
+  const evidence = useVehicleEvidence(vehicleId);
+  const photos = usePhotos(vehicleId);
   const d = useDealership();
   if (!Number.isInteger(vehicleId)) return <Notice tone="danger" title="That is not a vehicle address." />;
   if (v.isPending || d.isPending) return <Loading label="Loading the vehicle…" />;
@@ -42,7 +48,7 @@ export default function VehicleLayout() {
   const vehicle = v.data.vehicle;
   const dealership = d.data.dealership;
   const ctx: VehicleContext = { vehicle, dealership, user };
-  const unchecked = vehicle.evidence.zones.filter((z) => z.state === "unchecked").length;
+  const unchecked = evidence.data?.zones.filter((z) => z.state === "unchecked").length;
   return (
     <>
       <p className="mb-2 text-sm"><Link to="/app/vehicles">← Stock</Link></p>
@@ -73,7 +79,7 @@ export default function VehicleLayout() {
                 className={({ isActive }) => `block whitespace-nowrap border-b-3 px-4 py-3 font-bold no-underline ${isActive ? "border-signal text-ink" : "border-transparent text-ink-soft hover:text-ink"}`}
               >
                 {t.label}
-                {t.to === "photos" ? <span className="ml-1 text-xs font-normal">({vehicle.evidence.photos.length})</span> : null}
+                {t.to === "photos" && photos.data ? <span className="ml-1 text-xs font-normal">({photos.data.photos.length})</span> : null}
                 {t.to === "walkaround" && unchecked ? <span className="ml-1 text-xs font-normal">({unchecked} to check)</span> : null}
               </NavLink>
             </li>
@@ -86,7 +92,13 @@ export default function VehicleLayout() {
         </div>
         <aside className="flex flex-col gap-6">
           <Panel title="Condition">
-            <ConditionSummary evidence={vehicle.evidence} />
+            {evidence.isPending ? (
+              <Loading label="Loading the condition…" />
+            ) : evidence.isError ? (
+              <Notice tone="danger" title={evidence.error.message} />
+            ) : (
+              <ConditionSummary evidence={evidence.data} />
+            )}
           </Panel>
           <Panel title="Publishing">
             <PublishPanel vehicle={vehicle} role={user.role} />

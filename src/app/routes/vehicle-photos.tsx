@@ -11,15 +11,16 @@ export default function VehiclePhotosRoute() {
   const photos = usePhotos(vehicle.id);
   const refresh = useRefreshPhotos(vehicle.id);
   const editable = can(user, "evidence.write");
-  const count = photos.data?.photos.length ?? vehicle.evidence.photos.length;
+  const needed = photos.data ? `${photos.data.photos.length} of at least ${dealership.minPhotos}` : `At least ${dealership.minPhotos}`;
   return (
     <div className="flex flex-col gap-6">
       {editable ? (
         <Panel title="Add photos">
           <p className="mb-3 text-sm text-ink-soft">
-            {count} of at least {dealership.minPhotos} photos before this vehicle may go live. Photograph each side, front and rear, the interior, the odometer, and a close-up of every defect with a ruler beside it.
+            {needed} photos before this vehicle may go live. Photograph each side, front and rear, the interior,
+            the odometer, and a close-up of every defect with a ruler beside it.
           </p>
-          <UploadQueue vehicleId={vehicle.id} onUploaded={refresh} disabled={false} />
+          <UploadQueue vehicleId={vehicle.id} onUploaded={() => void refresh()} disabled={false} />
         </Panel>
       ) : (
         <Notice tone="info" title="Marketing can view the photos; workshop and sales add and arrange them." />

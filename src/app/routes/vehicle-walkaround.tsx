@@ -1,21 +1,31 @@
-import { useEffect, useMemo, useState } from "react";
+import { useMemo, useState } from "react";
 import { useSearchParams } from "react-router";
-import { useVehicleContext } from "../layouts/VehicleLayout.tsx";
+import { useVehicleContext, type VehicleContext } from "../layouts/VehicleLayout.tsx";
+import { useVehicleEvidence, type VehicleEvidence } from "../../features/vehicles/api/evidence.ts";
 import { useWalkaroundWrites, type DefectView } from "../../features/walkaround/api/walkaround.ts";
 import { PinnablePhoto } from "../../features/walkaround/components/PinnablePhoto.tsx";
 import { DefectForm, draftFrom, draftToInput, emptyDraft, type DefectDraft } from "../../features/walkaround/components/DefectForm.tsx";
 import { UploadQueue } from "../../features/photos/components/UploadQueue.tsx";
-import { useRefreshPhotos } from "../../features/photos/api/photos.ts";
+import { usePhotos, useRefreshPhotos, type PhotoView } from "../../features/photos/api/photos.ts";
 import { DEFECT_KIND_LABELS, REPAIR_PLAN_LABELS, SEVERITY_LABELS, ZONES, ZONE_LABELS, type Severity, type Zone } from "../../../shared/constants/evidence.ts";
-import { Notice } from "../../components/feedback/Notice.tsx";
+import { Loading, Notice } from "../../components/feedback/Notice.tsx";
 import { can } from "../../../shared/permissions.ts";
 
 const STATE_TEXT = { unchecked: "To check", nothing_found: "Nothing found", defects: "Defects noted" } as const;
 
 /** The zone-by-zone pass, phone first: pick a zone, pin what you find on a photo, or mark it clear, then move on. */
 export default function VehicleWalkaroundRoute() {
-  const { vehicle, dealership, user } = useVehicleContext();
-  const { zones, defects, photos } = vehicle.evidence;
+  const context = useVehicleContext();
+  const evidence = useVehicleEvidence(context.vehicle.id);
+  const photos = usePhotos(context.vehicle.id);
+  if (evidence.isError) return <Notice tone="danger" title={evidence.error.message} />;
+  if (photos.isError) return <Notice tone="danger" title={photos.error.message} />;
+  if (evidence.isPending || photos.isPending) return <Loading label="Loading the walk-around…" />;
+  return <Walkaround {...context} evidence={evidence.data} photos={photos.data.photos} />;
+}
+
+function Walkaround({ vehicle, dealership, user, evidence, photos }: VehicleContext & { evidence: VehicleEvidence; photos: PhotoView[] }) {
+  const { zones, defects } = evidence;
   const [params, setParams] = useSearchParams();
   const firstUnchecked = zones.find((z) => z.state === "unchecked")?.zone ?? ZONES[0];
   const zone = (ZONES as readonly string[]).includes(params.get("zone") ?? "") ? (params.get("zone") as Zone) : firstUnchecked;
@@ -32,13 +42,16 @@ export default function VehicleWalkaroundRoute() {
   const [placing, setPlacing] = useState(false);
   const [message, setMessage] = useState<string | null>(null);
 
-  useEffect(() => {
+  // Another zone starts clean: set while rendering (React's pattern for state that follows a prop), not in an effect.
+  const [formZone, setFormZone] = useState(zone);
+  if (formZone !== zone) {
+    setFormZone(zone);
     setPhotoId(null);
     setEditing(null);
     setPin(null);
     setDraft(emptyDraft());
     setPlacing(false);
-  }, [zone]);
+  }
 
   const here = defects.filter((d) => d.zone === zone);
   const state = zones.find((z) => z.zone === zone)!;
@@ -46,16 +59,18 @@ export default function VehicleWalkaroundRoute() {
   const nextZone = () => {
     const i = ZONES.indexOf(zone);
     const after = [...ZONES.slice(i + 1), ...ZONES.slice(0, i)].find((z) => zones.find((s) => s.zone === z)?.state === "unchecked");
-    go(after ?? ZONES[(i + 1) % ZONES.length]!);
+    go(after ?? ZONES[(i + 1) % ZONES.length]);
   };
 
   function save(fieldsOk: boolean) {
     if (!fieldsOk) return;
     const mutation = editing ? writes.updateDefect : writes.addDefect;
-    const body = editing ? { id: editing.id, version: editing.version, ...draftToInput(draft, zone, pin ?? editing.pin ?? null) } : draftToInput(draft, zone, pin);
+    const body = editing
+      ? { id: editing.id, version: editing.version, ...draftToInput(draft, zone, pin ?? editing.pin ?? null) }
+      : draftToInput(draft, zone, pin);
     mutation.mutate(body as never, {
       onSuccess: (r) => {
-        const d = (r as { defect: DefectView }).defect;
+        const d = r.defect;
         setMessage(`Defect ${d.number} ${editing ? "updated" : "recorded"}${d.pin ? " and pinned" : ""}.`);
         setDraft(emptyDraft());
         setPin(null);
@@ -75,11 +90,11 @@ export default function VehicleWalkaroundRoute() {
             <li key={z.zone}>
               <button
                 type="button"
-                onClick={() => go(z.zone as Zone)}
+                onClick={() => go(z.zone)}
                 aria-current={z.zone === zone ? "true" : undefined}
                 className={`flex min-h-14 w-full flex-col items-start rounded-md border px-3 py-2 text-left ${z.zone === zone ? "border-ink bg-paper-raised shadow-[inset_0_-3px_0_var(--color-signal)]" : "border-line bg-paper-raised"}`}
               >
-                <span className="font-bold">{ZONE_LABELS[z.zone as Zone]}</span>
+                <span className="font-bold">{ZONE_LABELS[z.zone]}</span>
                 <span className={`text-xs ${z.state === "unchecked" ? "font-bold text-ochre" : "text-ink-soft"}`}>
                   {z.state === "defects" ? `${z.defects} defect${z.defects === 1 ? "" : "s"}` : STATE_TEXT[z.state]}
                 </span>
@@ -131,11 +146,15 @@ export default function VehicleWalkaroundRoute() {
               <PinnablePhoto
                 photo={photo}
                 defects={defects.filter((d) => d.id !== editing?.id || !pin)}
-                preview={pin && pin.photoId === photo.id ? { number: editing?.number ?? Math.max(0, ...defects.map((d) => d.number)) + 1, severity: draft.severity as Severity, x: pin.x, y: pin.y } : null}
+                preview={
+                  pin && pin.photoId === photo.id
+                    ? { number: editing?.number ?? Math.max(0, ...defects.map((d) => d.number)) + 1, severity: draft.severity as Severity, x: pin.x, y: pin.y }
+                    : null
+                }
                 placing={placing}
                 selectedId={editing?.id ?? null}
                 onPlace={(x, y) => (setPin({ photoId: photo.id, x, y }), setPlacing(false))}
-                onSelect={(d) => d.zone !== zone && go(d.zone as Zone)}
+                onSelect={(d) => d.zone !== zone && go(d.zone)}
               />
             ) : null}
           </div>
@@ -145,7 +164,7 @@ export default function VehicleWalkaroundRoute() {
 
         {editable ? (
           <>
-            <UploadQueue vehicleId={vehicle.id} onUploaded={refreshPhotos} disabled={false} />
+            <UploadQueue vehicleId={vehicle.id} onUploaded={() => void refreshPhotos()} disabled={false} />
             <DefectForm
               draft={draft}
               onChange={setDraft}

@@ -3,9 +3,10 @@ import { get, post } from "../../../lib/api-client.ts";
 import { sessionKeys } from "../../../lib/auth.ts";
 import type { SessionUser } from "../../../../shared/schemas/auth.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
-import type { inspectInvite } from "../../../../server/modules/auth/tokens.service.ts";
+import type { InviteView } from "../../../../server/modules/auth/auth.presenter.ts";
 
-export type Invitation = Awaited<ReturnType<typeof inspectInvite>>;
+/** GET /api/auth/invitations/:token: who the invitation is for. */
+export type Invitation = InviteView;
 
 export const accountKeys = {
   all: ["accounts"] as const,

@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState, type FormEvent } from "react";
+import { useEffect, useMemo, useRef, useState, type FormEvent, type ReactNode } from "react";
 import { CHECK_ITEMS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "../../../../shared/constants/evidence.ts";
 import { NOT_A_CERTIFICATE } from "../../../../shared/domain/cautions.ts";
 import { formatTreadDepth } from "../../../../shared/domain/display.ts";
@@ -6,12 +6,12 @@ import type { Role } from "../../../../shared/constants/roles.ts";
 import { can } from "../../../../shared/permissions.ts";
 import { dealershipDay } from "../../../../shared/domain/calendar.ts";
 import { isApiError } from "../../../lib/api-client.ts";
-import type { VehicleView } from "../../vehicles/api/vehicles.ts";
+import type { VehicleEvidence } from "../../vehicles/api/evidence.ts";
 import type { DealershipView } from "../../settings/api/dealership.ts";
-import { useReloadChecks, useSaveChecks, useSaveTyres, type ChecksView } from "../api/checks.ts";
+import { useReloadChecks, useSaveChecks, useSaveTyres } from "../api/checks.ts";
 import {
   checkErrorKeys, checksDirty, checksFormFrom, liveCautions, tyreErrorKeys, tyresDirty, tyresFormFrom, validateChecks, validateTyres,
-  type CheckForm, type ChecksForm, type FieldErrors, type TyreField, type TyresForm,
+  type CheckForm, type FieldErrors, type TyreField,
 } from "../form-model.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
@@ -19,11 +19,12 @@ import { CautionsPanel } from "./CautionsPanel.tsx";
 import { CheckRow } from "./CheckRow.tsx";
 import { TyreCard } from "./TyreCard.tsx";
 import { Measure } from "./inputs.tsx";
+import { useSavedPart } from "./use-saved-part.ts";
 
 const ROAD: readonly TyrePosition[] = TYRE_POSITIONS.filter((p) => p !== "spare");
 
 interface Props {
-  vehicle: VehicleView;
+  vehicle: { id: number; evidence: VehicleEvidence };
   dealership: DealershipView;
   role: Role;
 }
@@ -34,24 +35,18 @@ const messageOf = (e: unknown) => (e instanceof Error ? e.message : "Something w
 export function ChecksScreen({ vehicle, dealership, role }: Props) {
   const canEdit = can(role, "evidence.write");
   const today = dealershipDay(dealership.timeZone);
-  const rules = useMemo(() => ({ legalMinTreadMm: dealership.legalMinTreadMm, newTyreTreadMm: dealership.newTyreTreadMm }), [dealership.legalMinTreadMm, dealership.newTyreTreadMm]);
+  const { legalMinTreadMm, newTyreTreadMm } = dealership;
+  const rules = useMemo(() => ({ legalMinTreadMm, newTyreTreadMm }), [legalMinTreadMm, newTyreTreadMm]);
   const locale = dealership.locale;
   const ev = vehicle.evidence;
 
-  // What was last saved (the base), and what is typed.
-  const [tyresBase, setTyresBase] = useState(ev.tyres);
-  const [checksBase, setChecksBase] = useState(ev.checks);
-  const tyresBaseForm = useMemo(() => tyresFormFrom(tyresBase, today), [tyresBase, today]);
-  const checksBaseForm = useMemo(() => checksFormFrom(checksBase), [checksBase]);
-  const [tyres, setTyres] = useState<TyresForm>(() => tyresFormFrom(ev.tyres, today));
-  const [checks, setChecks] = useState<ChecksForm>(() => checksFormFrom(ev.checks));
-  const tyresNow = useRef(tyres);
-  const checksNow = useRef(checks);
-  tyresNow.current = tyres;
-  checksNow.current = checks;
-
   const [errors, setErrors] = useState<FieldErrors>({});
   const [conflict, setConflict] = useState({ tyres: false, checks: false });
+  // What was last saved (the base), and what is typed, for each part.
+  const tyresPart = useSavedPart(ev.tyres, tyresFormFrom, tyresDirty, { today, held: conflict.tyres });
+  const checksPart = useSavedPart(ev.checks, checksFormFrom, checksDirty, { today, held: conflict.checks });
+  const { form: tyres, edit: setTyres } = tyresPart;
+  const { form: checks, edit: setChecks, base: checksBase, baseForm: checksBaseForm } = checksPart;
   const [problem, setProblem] = useState<string | null>(null);
   const [note, setNote] = useState<string | null>(null);
   const noticesRef = useRef<HTMLDivElement>(null);
@@ -61,24 +56,10 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
   const reload = useReloadChecks(vehicle.id);
   const busy = saveTyres.isPending || saveChecks.isPending;
 
-  const tDirty = tyresDirty(tyres, tyresBaseForm);
-  const cDirty = checksDirty(checks, checksBaseForm);
+  const tDirty = tyresPart.dirty;
+  const cDirty = checksPart.dirty;
   const dirty = tDirty || cDirty;
   const live = useMemo(() => liveCautions(tyres, checks, rules), [tyres, checks, rules]);
-
-  // A newer saved version (someone else, read on window focus) replaces the form only while nothing is typed in it.
-  useEffect(() => {
-    if (ev.tyres.version > tyresBase.version && !tDirty && !conflict.tyres) {
-      setTyresBase(ev.tyres);
-      setTyres(tyresFormFrom(ev.tyres, today));
-    }
-  }, [ev.tyres]); // eslint-disable-line react-hooks/exhaustive-deps
-  useEffect(() => {
-    if (ev.checks.version > checksBase.version && !cDirty && !conflict.checks) {
-      setChecksBase(ev.checks);
-      setChecks(checksFormFrom(ev.checks));
-    }
-  }, [ev.checks]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useEffect(() => {
     const warn = (e: BeforeUnloadEvent) => {
@@ -108,18 +89,9 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
       el?.focus({ preventScroll: true });
     });
 
-  /** Keeps the form as it is when the person typed on while the save was on its way. */
-  function adoptTyres(data: ChecksView, sent: TyresForm, day: string) {
-    setTyresBase(data.tyres);
-    if (tyresNow.current === sent) setTyres(tyresFormFrom(data.tyres, day));
-  }
-  function adoptChecks(data: ChecksView, sent: ChecksForm) {
-    setChecksBase(data.checks);
-    if (checksNow.current === sent) setChecks(checksFormFrom(data.checks));
-  }
+  const showProblem = (err: unknown) => setProblem(messageOf(err));
 
-  async function save(e: FormEvent) {
-    e.preventDefault();
+  async function save() {
     if (!canEdit || busy || !dirty) return;
     setProblem(null);
     setNote(null);
@@ -127,7 +99,7 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
     const sentTyres = tyres;
     const sentChecks = checks;
     // The same schemas the server uses, so mistakes show before anything is sent.
-    const t = tDirty ? validateTyres(sentTyres, tyresBase.version, day) : null;
+    const t = tDirty ? validateTyres(sentTyres, tyresPart.base.version, day) : null;
     const c = cDirty ? validateChecks(sentChecks, checksBase.version) : null;
     const found = { ...(t?.errors ?? {}), ...(c?.errors ?? {}) };
     setErrors(found);
@@ -137,29 +109,26 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
     const stale = { ...conflict };
     let fieldErrors: FieldErrors = {};
     let other: string | null = null;
-    const fail = (err: unknown, part: "tyres" | "checks", toKeys: (f: Record<string, string>) => FieldErrors) => {
-      if (isApiError(err) && err.code === "stale_version") stale[part] = true;
-      else if (isApiError(err) && err.status === 400 && Object.keys(err.fields).length) fieldErrors = { ...fieldErrors, ...toKeys(err.fields) };
-      else other = messageOf(err);
+    /** Sends one part; a refusal is sorted into a conflict, messages on fields, or a problem for the top. */
+    const send = async (part: "tyres" | "checks", what: string, run: () => Promise<void>, toKeys: (f: Record<string, string>) => FieldErrors) => {
+      try {
+        await run();
+        stale[part] = false;
+        saved.push(what);
+      } catch (err) {
+        if (isApiError(err) && err.code === "stale_version") stale[part] = true;
+        else if (isApiError(err) && err.status === 400 && Object.keys(err.fields).length) fieldErrors = { ...fieldErrors, ...toKeys(err.fields) };
+        else other = messageOf(err);
+      }
     };
     // One after the other, so the second answer carries the cautions of both.
     if (t) {
-      try {
-        adoptTyres(await saveTyres.mutateAsync(t.body), sentTyres, day);
-        stale.tyres = false;
-        saved.push("tyre readings");
-      } catch (err) {
-        fail(err, "tyres", (f) => tyreErrorKeys(f, t.positions));
-      }
+      const adopt = async () => tyresPart.adopt((await saveTyres.mutateAsync(t.body)).tyres, sentTyres, day);
+      await send("tyres", "tyre readings", adopt, (f) => tyreErrorKeys(f, t.positions));
     }
     if (c) {
-      try {
-        adoptChecks(await saveChecks.mutateAsync(c.body), sentChecks);
-        stale.checks = false;
-        saved.push("checks");
-      } catch (err) {
-        fail(err, "checks", (f) => checkErrorKeys(f, c.items));
-      }
+      const adopt = async () => checksPart.adopt((await saveChecks.mutateAsync(c.body)).checks, sentChecks, day);
+      await send("checks", "checks", adopt, (f) => checkErrorKeys(f, c.items));
     }
     setConflict(stale);
     setErrors(fieldErrors);
@@ -171,35 +140,26 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
 
   /** Their version replaces what was typed in the part that clashed. */
   async function loadTheirs() {
-    try {
-      const data = await reload.mutateAsync();
-      if (conflict.tyres) {
-        setTyresBase(data.tyres);
-        setTyres(tyresFormFrom(data.tyres, today));
-      }
-      if (conflict.checks) {
-        setChecksBase(data.checks);
-        setChecks(checksFormFrom(data.checks));
-      }
-      setConflict({ tyres: false, checks: false });
-      setErrors({});
-      setNote("Their latest readings and checks are loaded.");
-    } catch (err) {
-      setProblem(messageOf(err));
-    }
+    const data = await reload.mutateAsync();
+    if (conflict.tyres) tyresPart.takeTheirs(data.tyres);
+    if (conflict.checks) checksPart.takeTheirs(data.checks);
+    setConflict({ tyres: false, checks: false });
+    setErrors({});
+    setNote("Their latest readings and checks are loaded.");
   }
   /** Theirs become the base; what was typed stays in the form, ready to save over them. */
   async function keepMine() {
-    try {
-      const data = await reload.mutateAsync();
-      if (conflict.tyres) setTyresBase(data.tyres);
-      if (conflict.checks) setChecksBase(data.checks);
-      setConflict({ tyres: false, checks: false });
-      setNote("Your values are kept. Save to replace theirs with them.");
-    } catch (err) {
-      setProblem(messageOf(err));
-    }
+    const data = await reload.mutateAsync();
+    if (conflict.tyres) tyresPart.keepMine(data.tyres);
+    if (conflict.checks) checksPart.keepMine(data.checks);
+    setConflict({ tyres: false, checks: false });
+    setNote("Your values are kept. Save to replace theirs with them.");
   }
+  // The handlers' promises are dropped on purpose: whatever goes wrong is shown at the top, the form kept as it is.
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    void save().catch(showProblem);
+  };
 
   const errorCount = Object.keys(errors).length;
   const inConflict = conflict.tyres || conflict.checks;
@@ -216,7 +176,7 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
   const measuredRoad = ROAD.filter((p) => tyres.tyres[p].treadInnerMm || tyres.tyres[p].treadCentreMm || tyres.tyres[p].treadOuterMm).length;
 
   return (
-    <form onSubmit={save} noValidate aria-label="Tyres and checks" className="flex flex-col gap-6">
+    <form onSubmit={submit} noValidate aria-label="Tyres and checks" className="flex flex-col gap-6">
       <div ref={noticesRef} className="flex scroll-mt-4 flex-col gap-3 empty:hidden">
         {!canEdit ? <Notice tone="info" title="Your role can read the tyres and checks; workshop, sales and admin record them." /> : null}
         {inConflict ? (
@@ -226,10 +186,10 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
               else. Yours were not saved and are still in the form until you choose.
             </p>
             <div className="mt-3 flex flex-col gap-2 sm:flex-row">
-              <Button type="button" tone="primary" busy={reload.isPending} onClick={loadTheirs}>
+              <Button type="button" tone="primary" busy={reload.isPending} onClick={() => void loadTheirs().catch(showProblem)}>
                 Load theirs
               </Button>
-              <Button type="button" tone="secondary" disabled={reload.isPending} onClick={keepMine}>
+              <Button type="button" tone="secondary" disabled={reload.isPending} onClick={() => void keepMine().catch(showProblem)}>
                 Keep mine and save over theirs
               </Button>
             </div>
@@ -242,16 +202,18 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
       <CautionsPanel saved={ev.cautions} live={live} editing={dirty} />
 
       <fieldset disabled={!canEdit} className="m-0 flex min-w-0 flex-col gap-8 border-0 p-0">
-        <section aria-labelledby="tyres-heading" className="flex flex-col gap-4">
-          <div>
-            <h2 id="tyres-heading" className="text-xl font-bold">
-              Tyres
-            </h2>
-            <p className="mt-1 text-sm text-ink-soft">
-              Measure in the main grooves at three points across each tyre; the shallowest decides. Legal minimum here {formatTreadDepth(rules.legalMinTreadMm, { locale })} (set in
-              Settings; local law decides how it is measured). {measuredRoad} of 4 road tyres measured.
-            </p>
-          </div>
+        <Part
+          id="tyres-heading"
+          title="Tyres"
+          className="gap-4"
+          intro={
+            <>
+              Measure in the main grooves at three points across each tyre; the shallowest decides.
+              Legal minimum here {formatTreadDepth(rules.legalMinTreadMm, { locale })} (set in Settings; local law decides how it
+              is measured). {measuredRoad} of 4 road tyres measured.
+            </>
+          }
+        >
           <div className="max-w-xs">
             <Measure
               label="Measured on"
@@ -330,17 +292,19 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
               </section>
             )}
           </div>
-        </section>
+        </Part>
 
-        <section aria-labelledby="checks-heading" className="flex flex-col gap-3">
-          <div>
-            <h2 id="checks-heading" className="text-xl font-bold">
-              Safety and function checks
-            </h2>
-            <p className="mt-1 text-sm text-ink-soft">
-              {answered} of {CHECK_ITEMS.length} checked. A Fail on a safety item blocks publishing until it is repaired and checked again. Unanswered checks are not saved.
-            </p>
-          </div>
+        <Part
+          id="checks-heading"
+          title="Safety and function checks"
+          className="gap-3"
+          intro={
+            <>
+              {answered} of {CHECK_ITEMS.length} checked. A Fail on a safety item blocks publishing until it is repaired and checked
+              again. Unanswered checks are not saved.
+            </>
+          }
+        >
           {errors["checks._"] ? <p className="text-sm font-bold text-brick">{errors["checks._"]}</p> : null}
           <div className="rounded-lg border border-line bg-paper-raised px-4">
             {CHECK_ITEMS.map((item) => {
@@ -361,7 +325,7 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
           <p className="rounded-md border border-line bg-paper-sunk px-4 py-3 text-sm" data-testid="not-a-certificate">
             {NOT_A_CERTIFICATE}
           </p>
-        </section>
+        </Part>
       </fieldset>
 
       {canEdit ? (
@@ -375,5 +339,20 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
         </div>
       ) : null}
     </form>
+  );
+}
+
+/** One part of the form: its heading and what to do, then its fields. */
+function Part({ id, title, intro, className, children }: { id: string; title: string; intro: ReactNode; className: string; children: ReactNode }) {
+  return (
+    <section aria-labelledby={id} className={`flex flex-col ${className}`}>
+      <div>
+        <h2 id={id} className="text-xl font-bold">
+          {title}
+        </h2>
+        <p className="mt-1 text-sm text-ink-soft">{intro}</p>
+      </div>
+      {children}
+    </section>
   );
 }

@@ -2,12 +2,13 @@ import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient }
 import { get, patch, post } from "../../../lib/api-client.ts";
 import type { UpdateLeadInput } from "../../../../shared/schemas/enquiries.ts";
 import type { LeadStatus } from "../../../../shared/constants/leads.ts";
-import type { getLead, leadCounts, presentLead } from "../../../../server/modules/leads/leads.service.ts";
+import type { ConversationItem, LeadCounts, LeadDetail, LeadView } from "../../../../server/modules/leads/leads.presenter.ts";
 
-export type LeadRow = ReturnType<typeof presentLead>;
-export type LeadDetail = Awaited<ReturnType<typeof getLead>>;
-export type ConversationItem = LeadDetail["conversation"][number];
-export type LeadStats = Awaited<ReturnType<typeof leadCounts>>;
+export type { ConversationItem, LeadDetail };
+/** A row of the inbox. */
+export type LeadRow = LeadView;
+/** Marketing's counts per vehicle and per source. */
+export type LeadStats = LeadCounts;
 
 /** The inbox filters as the URL carries them (assignee in the screen's words; the API's me/none are mapped here). */
 export interface LeadFilters {
@@ -63,8 +64,8 @@ function useLeadWrite<I>(fn: (input: I) => Promise<{ lead: LeadDetail }>) {
     mutationFn: fn,
     onSuccess: ({ lead }) => {
       qc.setQueryData(leadKeys.detail(lead.id), { lead });
-      qc.invalidateQueries({ queryKey: leadKeys.lists() });
-      qc.invalidateQueries({ queryKey: leadKeys.stats() });
+      void qc.invalidateQueries({ queryKey: leadKeys.lists() });
+      void qc.invalidateQueries({ queryKey: leadKeys.stats() });
     },
   });
 }

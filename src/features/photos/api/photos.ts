@@ -1,28 +1,51 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { queryOptions, useIsFetching, useMutation, useQuery, useQueryClient, type QueryClient } from "@tanstack/react-query";
 import { ApiError, del, get, patch, put } from "../../../lib/api-client.ts";
 import { vehicleKeys } from "../../vehicles/api/vehicles.ts";
-import type { PhotoView } from "../../../../server/modules/photos/photos.presenter.ts";
+import type { PhotoView, UploadResult } from "../../../../server/modules/photos/photos.presenter.ts";
 
-export type { PhotoView };
+export type { PhotoView, UploadResult };
 
-export const photoKeys = {
-  all: ["photos"] as const,
-  forVehicle: (vehicleId: number) => [...photoKeys.all, vehicleId] as const,
-};
+interface PhotoList {
+  photos: PhotoView[];
+}
+
+const processing = (photos: readonly PhotoView[] | undefined) => new Set((photos ?? []).filter((p) => p.status === "processing").map((p) => p.id));
+
+/**
+ * Readiness counts the photos still being processed ("Photos processed"), so when one stops being (its sizes are
+ * made, it failed, or it went) the detail's readiness is re-read. Called with every new photo list.
+ */
+function rereadReadinessWhenFinished(client: QueryClient, vehicleId: number, next: readonly PhotoView[]) {
+  const before = processing(client.getQueryData<PhotoList>(vehicleKeys.photos(vehicleId))?.photos);
+  const still = processing(next);
+  if ([...before].some((id) => !still.has(id))) void client.invalidateQueries({ queryKey: vehicleKeys.detail(vehicleId) });
+}
+
+/** Photos read elsewhere (the evidence answer carries them) enter the one photo cache here. */
+export function putPhotos(client: QueryClient, vehicleId: number, photos: PhotoView[]) {
+  rereadReadinessWhenFinished(client, vehicleId, photos);
+  client.setQueryData<PhotoList>(vehicleKeys.photos(vehicleId), { photos });
+}
 
 export const photosQueryOptions = (vehicleId: number) =>
   queryOptions({
-    queryKey: photoKeys.forVehicle(vehicleId),
-    queryFn: () => get<{ photos: PhotoView[] }>(`/api/vehicles/${vehicleId}/photos`),
-    // Re-read while any photo is still being processed, so it turns ready by itself.
+    queryKey: vehicleKeys.photos(vehicleId),
+    queryFn: async ({ client }) => {
+      const data = await get<PhotoList>(`/api/vehicles/${vehicleId}/photos`);
+      rereadReadinessWhenFinished(client, vehicleId, data.photos);
+      return data;
+    },
+    // Re-read while any photo is still being processed, so it turns ready by itself (and readiness with it).
     refetchInterval: (q) => (q.state.data?.photos.some((p) => p.status === "processing") ? 1500 : false),
   });
 
-export const usePhotos = (vehicleId: number) => useQuery(photosQueryOptions(vehicleId));
-
-export interface UploadResult {
-  photos: PhotoView[];
-  refused: Array<{ name: string; status: number; reason: string }>;
+/**
+ * The one photo cache, read by the layout, the photos page and the walk-around. The evidence read brings the photos
+ * with it, so while that read is under way this one waits instead of asking the server a second time.
+ */
+export function usePhotos(vehicleId: number) {
+  const evidenceLoading = useIsFetching({ queryKey: vehicleKeys.evidence(vehicleId) }) > 0;
+  return useQuery({ ...photosQueryOptions(vehicleId), enabled: !evidenceLoading });
 }
 
 /** One file per request, over XHR so the page can show its progress and retry it alone. */
@@ -52,44 +75,54 @@ export function uploadPhoto(vehicleId: number, file: File, onProgress: (fraction
   });
 }
 
-function useRefresh(vehicleId: number) {
+/** After an upload: the photos, and readiness (the count, the cover, photos still processing). */
+export function useRefreshPhotos(vehicleId: number) {
   const qc = useQueryClient();
-  return () =>
-    Promise.all([qc.invalidateQueries({ queryKey: photoKeys.forVehicle(vehicleId) }), qc.invalidateQueries({ queryKey: vehicleKeys.detail(vehicleId) })]);
+  return () => Promise.all([vehicleKeys.photos(vehicleId), vehicleKeys.detail(vehicleId)].map((queryKey) => qc.invalidateQueries({ queryKey })));
 }
 
+/** A caption, zone or cover: the answer replaces that photo in the cache. Readiness is unchanged (a cover is always set). */
 export function useUpdatePhoto(vehicleId: number) {
-  const refresh = useRefresh(vehicleId);
+  const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ id, ...input }: { id: number; version: number; caption?: string; zone?: string | null; isCover?: true }) =>
       patch<{ photo: PhotoView }>(`/api/vehicles/${vehicleId}/photos/${id}`, input),
-    onSettled: refresh,
+    onSuccess: ({ photo }, input) => {
+      const prev = qc.getQueryData<PhotoList>(vehicleKeys.photos(vehicleId));
+      // A new cover takes the mark off the old one, as the server does (without a new version for it).
+      if (prev) putPhotos(qc, vehicleId, prev.photos.map((p) => (p.id === photo.id ? photo : input.isCover ? { ...p, isCover: false } : p)));
+    },
+    onError: () => qc.invalidateQueries({ queryKey: vehicleKeys.photos(vehicleId) }),
   });
 }
 
 export function useReorderPhotos(vehicleId: number) {
   const qc = useQueryClient();
-  const refresh = useRefresh(vehicleId);
+  const key = vehicleKeys.photos(vehicleId);
   return useMutation({
-    mutationFn: (order: number[]) => put<{ photos: PhotoView[] }>(`/api/vehicles/${vehicleId}/photos/order`, { order }),
+    mutationFn: (order: number[]) => put<PhotoList>(`/api/vehicles/${vehicleId}/photos/order`, { order }),
     // Show the new order at once; the server's answer (or a reload on conflict) settles it.
     onMutate: (order) => {
-      const key = photoKeys.forVehicle(vehicleId);
-      const prev = qc.getQueryData<{ photos: PhotoView[] }>(key);
-      if (prev) qc.setQueryData(key, { photos: order.map((id) => prev.photos.find((p) => p.id === id)!).filter(Boolean) });
+      const prev = qc.getQueryData<PhotoList>(key);
+      if (prev) qc.setQueryData(key, { photos: order.map((id) => prev.photos.find((p) => p.id === id)).filter((p) => p !== undefined) });
       return { prev };
     },
-    onError: (_e, _o, c) => c?.prev && qc.setQueryData(photoKeys.forVehicle(vehicleId), c.prev),
-    onSettled: refresh,
+    onSuccess: ({ photos }) => putPhotos(qc, vehicleId, photos),
+    onError: (_e, _o, c) => {
+      if (c?.prev) qc.setQueryData(key, c.prev);
+      void qc.invalidateQueries({ queryKey: key });
+    },
   });
 }
 
+/** A deleted photo takes its pins off their defects (the evidence) and counts for readiness. */
 export function useDeletePhoto(vehicleId: number) {
-  const refresh = useRefresh(vehicleId);
+  const qc = useQueryClient();
   return useMutation({
     mutationFn: (p: { id: number; version: number }) => del<void>(`/api/vehicles/${vehicleId}/photos/${p.id}?version=${p.version}`),
-    onSettled: refresh,
+    onSettled: () =>
+      Promise.all(
+        [vehicleKeys.photos(vehicleId), vehicleKeys.evidence(vehicleId), vehicleKeys.detail(vehicleId)].map((queryKey) => qc.invalidateQueries({ queryKey })),
+      ),
   });
 }
-
-export const useRefreshPhotos = useRefresh;

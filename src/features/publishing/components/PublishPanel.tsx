@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { Link } from "react-router";
-import type { VehicleView } from "../../vehicles/api/vehicles.ts";
+import type { VehicleDetail } from "../../vehicles/api/vehicles.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
 import { can } from "../../../../shared/permissions.ts";
 import { usePublish } from "../api/publishing.ts";
@@ -11,7 +11,7 @@ const SECTION_PATH = { record: "", photos: "photos", walkaround: "walkaround", c
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 /** Readiness as a checklist with links to what is missing, the publish action, and every revision so far. */
-export function PublishPanel({ vehicle, role }: { vehicle: VehicleView; role: Role }) {
+export function PublishPanel({ vehicle, role }: { vehicle: VehicleDetail; role: Role }) {
   const { readiness, publishing } = vehicle;
   const publish = usePublish(vehicle.id);
   const [reason, setReason] = useState("");

@@ -1,37 +1,26 @@
-import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient, type QueryClient } from "@tanstack/react-query";
 import { get, patch, post } from "../../../lib/api-client.ts";
 import type { StatusMoveInput, VehicleListQuery } from "../../../../shared/schemas/vehicles.ts";
-import type { VehicleRow, VehicleView as VehicleRecord } from "../../../../server/modules/vehicles/vehicles.presenter.ts";
-import type { Evidence } from "../../../../server/modules/condition/condition.service.ts";
-import type { publishingOf } from "../../../../server/modules/publishing/publishing.service.ts";
-import type { Readiness } from "../../../../shared/domain/readiness.ts";
+import type { VehicleHistory, VehicleList, VehicleRecord, VehicleRow, VehicleSuggestions } from "../../../../server/modules/vehicles/vehicles.presenter.ts";
+import type { PublishingView, VehicleDetail } from "../../../../server/modules/publishing/publishing.presenter.ts";
 
-export type Publishing = Awaited<ReturnType<typeof publishingOf>>;
+/** VehicleRecord: what a write answers. VehicleDetail: GET /api/vehicles/:id, the record with readiness and publishing. */
+export type { PublishingView, VehicleDetail, VehicleHistory, VehicleList, VehicleRecord, VehicleRow };
 
-/** The record as a write returns it; the detail read adds the evidence. */
-export type { VehicleRow, VehicleRecord, Evidence };
-export type VehicleView = VehicleRecord & { evidence: Evidence; readiness: Readiness; publishing: Publishing };
-
-export interface VehicleList {
-  vehicles: VehicleRow[];
-  total: number;
-  page: number;
-  pageSize: number;
-  pageCount: number;
-}
-
-export interface VehicleHistory {
-  statusHistory: Array<{ from: string | null; to: string; note: string; by: string | null; at: string }>;
-  audit: Array<{ action: string; by: string | null; at: string; before: Record<string, unknown> | null; after: Record<string, unknown> | null }>;
-}
-
+/**
+ * One vehicle's reads sit side by side under `one(id)`, so a write names exactly the ones it changed: the detail
+ * (record, readiness, publishing), the evidence (features/vehicles/api/evidence.ts), the photos (the one photo cache,
+ * features/photos/api) and the history.
+ */
 export const vehicleKeys = {
   all: ["vehicles"] as const,
   lists: () => [...vehicleKeys.all, "list"] as const,
   list: (filters: VehicleListQuery) => [...vehicleKeys.lists(), filters] as const,
-  details: () => [...vehicleKeys.all, "detail"] as const,
-  detail: (id: number) => [...vehicleKeys.details(), id] as const,
-  history: (id: number) => [...vehicleKeys.detail(id), "history"] as const,
+  one: (id: number) => [...vehicleKeys.all, "one", id] as const,
+  detail: (id: number) => [...vehicleKeys.one(id), "detail"] as const,
+  evidence: (id: number) => [...vehicleKeys.one(id), "evidence"] as const,
+  photos: (id: number) => [...vehicleKeys.one(id), "photos"] as const,
+  history: (id: number) => [...vehicleKeys.one(id), "history"] as const,
   suggestions: (q: string) => [...vehicleKeys.all, "suggestions", q] as const,
 };
 
@@ -52,7 +41,7 @@ export const vehicleListQueryOptions = (filters: VehicleListQuery) =>
   });
 
 export const vehicleQueryOptions = (id: number) =>
-  queryOptions({ queryKey: vehicleKeys.detail(id), queryFn: () => get<{ vehicle: VehicleView }>(`/api/vehicles/${id}`) });
+  queryOptions({ queryKey: vehicleKeys.detail(id), queryFn: () => get<{ vehicle: VehicleDetail }>(`/api/vehicles/${id}`) });
 
 export const vehicleHistoryQueryOptions = (id: number) =>
   queryOptions({ queryKey: vehicleKeys.history(id), queryFn: () => get<VehicleHistory>(`/api/vehicles/${id}/history`) });
@@ -60,7 +49,7 @@ export const vehicleHistoryQueryOptions = (id: number) =>
 export const suggestionsQueryOptions = (q: string) =>
   queryOptions({
     queryKey: vehicleKeys.suggestions(q),
-    queryFn: () => get<{ features: string[]; makes: string[] }>(`/api/vehicles/suggestions?q=${encodeURIComponent(q)}`),
+    queryFn: () => get<VehicleSuggestions>(`/api/vehicles/suggestions?q=${encodeURIComponent(q)}`),
     staleTime: 5 * 60_000,
   });
 
@@ -68,29 +57,42 @@ export const useVehicleList = (filters: VehicleListQuery) => useQuery(vehicleLis
 export const useVehicle = (id: number) => useQuery(vehicleQueryOptions(id));
 export const useVehicleHistory = (id: number) => useQuery(vehicleHistoryQueryOptions(id));
 
-function useVehicleWrite<I>(fn: (input: I) => Promise<{ vehicle: VehicleRecord }>) {
+/** A write's record goes into the detail already loaded; its readiness and publishing stay until they are re-read. */
+function putRecord(qc: QueryClient, record: VehicleRecord) {
+  qc.setQueryData<{ vehicle: VehicleDetail }>(vehicleKeys.detail(record.id), (old) => (old ? { vehicle: { ...old.vehicle, ...record } } : old));
+}
+
+export function useCreateVehicle() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: fn,
+    mutationFn: (input: Record<string, unknown>) => post<{ vehicle: VehicleRecord }>("/api/vehicles", input),
+    onSuccess: () => qc.invalidateQueries({ queryKey: vehicleKeys.lists() }),
+  });
+}
+
+/** A field save: the record from the answer, then readiness re-read behind it (the VIN, price and copy count). */
+export function useUpdateVehicle(id: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: Record<string, unknown>) => patch<{ vehicle: VehicleRecord }>(`/api/vehicles/${id}`, input),
     onSuccess: ({ vehicle }) => {
-      // Keep the evidence already loaded; the record part is the server's new answer. Readiness and publishing are
-      // not in that answer and a price or copy changes them, so the detail is re-read behind it.
-      qc.setQueryData<{ vehicle: VehicleView }>(vehicleKeys.detail(vehicle.id), (old) => (old ? { vehicle: { ...old.vehicle, ...vehicle } } : old));
-      qc.invalidateQueries({ queryKey: vehicleKeys.detail(vehicle.id) });
-      qc.invalidateQueries({ queryKey: vehicleKeys.lists() });
-      qc.invalidateQueries({ queryKey: vehicleKeys.history(vehicle.id) });
+      putRecord(qc, vehicle);
+      void qc.invalidateQueries({ queryKey: vehicleKeys.detail(id) });
+      void qc.invalidateQueries({ queryKey: vehicleKeys.history(id) });
+      void qc.invalidateQueries({ queryKey: vehicleKeys.lists() });
     },
   });
 }
 
-export const useCreateVehicle = () => useVehicleWrite((input: Record<string, unknown>) => post<{ vehicle: VehicleRecord }>("/api/vehicles", input));
-export const useUpdateVehicle = (id: number) =>
-  useVehicleWrite((input: Record<string, unknown>) => patch<{ vehicle: VehicleRecord }>(`/api/vehicles/${id}`, input));
-export const useMoveStatus = (id: number) =>
-  useVehicleWrite((input: StatusMoveInput) => post<{ vehicle: VehicleRecord }>(`/api/vehicles/${id}/status`, input));
-
-/** After any evidence write: the detail (evidence, condition index) and lists are re-read. */
-export function useInvalidateVehicle() {
+/** A status move changes the record and its history only: readiness does not depend on the status. */
+export function useMoveStatus(id: number) {
   const qc = useQueryClient();
-  return (id: number) => Promise.all([qc.invalidateQueries({ queryKey: vehicleKeys.detail(id) }), qc.invalidateQueries({ queryKey: vehicleKeys.lists() })]);
+  return useMutation({
+    mutationFn: (input: StatusMoveInput) => post<{ vehicle: VehicleRecord }>(`/api/vehicles/${id}/status`, input),
+    onSuccess: ({ vehicle }) => {
+      putRecord(qc, vehicle);
+      void qc.invalidateQueries({ queryKey: vehicleKeys.history(id) });
+      void qc.invalidateQueries({ queryKey: vehicleKeys.lists() });
+    },
+  });
 }

@@ -1,10 +1,9 @@
-import type { Evidence } from "../api/vehicles.ts";
+import type { VehicleEvidence } from "../api/evidence.ts";
 import { formatConditionIndex } from "../../../../shared/domain/display.ts";
-import { SEVERITY_LABELS, ZONE_LABELS, type Zone } from "../../../../shared/constants/evidence.ts";
-
+import { SEVERITY_LABELS, ZONE_LABELS } from "../../../../shared/constants/evidence.ts";
 
 /** The index as a number with its sentence, the counts, and the cautions; never a grade or a colour code. */
-export function ConditionSummary({ evidence }: { evidence: Evidence }) {
+export function ConditionSummary({ evidence }: { evidence: VehicleEvidence }) {
   const { condition, cautions, zones } = evidence;
   const unchecked = zones.filter((z) => z.state === "unchecked");
   return (
@@ -22,7 +21,7 @@ export function ConditionSummary({ evidence }: { evidence: Evidence }) {
         </p>
       ) : null}
       {unchecked.length ? (
-        <p className="text-sm"><strong>{unchecked.length} zone{unchecked.length === 1 ? "" : "s"} still to check:</strong> {unchecked.map((z) => ZONE_LABELS[z.zone as Zone]).join(", ")}.</p>
+        <p className="text-sm"><strong>{unchecked.length} zone{unchecked.length === 1 ? "" : "s"} still to check:</strong> {unchecked.map((z) => ZONE_LABELS[z.zone]).join(", ")}.</p>
       ) : (
         <p className="text-sm">Every zone checked.</p>
       )}

@@ -3,7 +3,8 @@ import { LABELS } from "../../../../shared/constants/vehicle.ts";
 import { Loading, Notice } from "../../../components/feedback/Notice.tsx";
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
-const show = (v: unknown) => (v === null || v === undefined || v === "" ? "—" : typeof v === "object" ? JSON.stringify(v).slice(0, 120) : String(v));
+// Audit values are JSON: strings as they are, numbers, booleans, lists and objects as JSON writes them.
+const show = (v: unknown) => (v === null || v === undefined || v === "" ? "—" : typeof v === "string" ? v : JSON.stringify(v).slice(0, 120));
 const statusLabel = (s: string | null) => (s ? ((LABELS.status as Record<string, string>)[s] ?? s) : "—");
 
 /** The vehicle's path and the audit trail: who changed which field, from what, to what, when. */

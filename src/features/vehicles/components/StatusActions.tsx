@@ -1,11 +1,11 @@
 import { useState } from "react";
 import { movesFrom } from "../../../../shared/domain/status.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
-import { useMoveStatus, type VehicleRecord as VehicleView } from "../api/vehicles.ts";
+import { useMoveStatus, type VehicleRecord } from "../api/vehicles.ts";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 
 /** The moves this role can make from the vehicle's status. Publishing has its own checks and screen. */
-export function StatusActions({ vehicle, role }: { vehicle: VehicleView; role: Role }) {
+export function StatusActions({ vehicle, role }: { vehicle: VehicleRecord; role: Role }) {
   const move = useMoveStatus(vehicle.id);
   const [note, setNote] = useState("");
   const moves = movesFrom(vehicle.status, role).filter((m) => !m.via);

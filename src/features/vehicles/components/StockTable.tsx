@@ -24,7 +24,15 @@ export function sortToState(sort: VehicleSort): SortingState {
   return [];
 }
 
-export function StockTable({ rows, currency, locale, sort, onSort }: { rows: VehicleRow[]; currency: string; locale: string; sort: VehicleSort; onSort: (s: VehicleSort) => void }) {
+interface Props {
+  rows: VehicleRow[];
+  currency: string;
+  locale: string;
+  sort: VehicleSort;
+  onSort: (s: VehicleSort) => void;
+}
+
+export function StockTable({ rows, currency, locale, sort, onSort }: Props) {
   const columns = useMemo(
     () => [
       col.accessor("stockNumber", {
@@ -72,6 +80,8 @@ export function StockTable({ rows, currency, locale, sort, onSort }: { rows: Veh
     [currency, locale],
   );
 
+  // The table instance is mutable and read fresh on every render; the compiler only skips memoising this component.
+  // eslint-disable-next-line react-hooks/incompatible-library -- nothing here is memoised by hand around it
   const table = useReactTable({
     data: rows,
     columns,

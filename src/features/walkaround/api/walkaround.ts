@@ -1,15 +1,15 @@
 import { useMutation } from "@tanstack/react-query";
 import { del, patch, post, put } from "../../../lib/api-client.ts";
-import { useInvalidateVehicle } from "../../vehicles/api/vehicles.ts";
+import { useEvidenceChanged } from "../../vehicles/api/evidence.ts";
 import type { DefectView } from "../../../../server/modules/walkaround/walkaround.presenter.ts";
 import type { CreateDefectInput, UpdateDefectInput } from "../../../../shared/schemas/evidence.ts";
 
 export type { DefectView };
 
-/** Walk-around writes; each re-reads the vehicle so zones, pins and the condition index stay in step. */
+/** Walk-around writes; each re-reads the evidence (zones, pins, the condition index) and the readiness made from it. */
 export function useWalkaroundWrites(vehicleId: number) {
-  const invalidate = useInvalidateVehicle();
-  const settle = () => invalidate(vehicleId);
+  const changed = useEvidenceChanged();
+  const settle = () => changed(vehicleId);
   return {
     addDefect: useMutation({ mutationFn: (input: CreateDefectInput) => post<{ defect: DefectView }>(`/api/vehicles/${vehicleId}/defects`, input), onSettled: settle }),
     updateDefect: useMutation({
