@@ -2,6 +2,7 @@ import express, { type Express } from "express";
 import helmet from "helmet";
 import compression from "compression";
 import { pinoHttp } from "pino-http";
+import type { SerializedRequest, SerializedResponse } from "pino";
 import { randomUUID } from "node:crypto";
 import type { AppContext } from "./lib/context.ts";
 import { loadSession } from "./middleware/authenticate.ts";
@@ -43,8 +44,8 @@ export function createApp(ctx: AppContext): Express {
       },
       // Request logs name the route and outcome only: bodies and cookies carry customers' details.
       serializers: {
-        req: (req) => ({ id: req.id, method: req.method, url: req.url }),
-        res: (res) => ({ statusCode: res.statusCode }),
+        req: (req: SerializedRequest) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: SerializedResponse) => ({ statusCode: res.statusCode }),
       },
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
       autoLogging: { ignore: (req) => req.url === "/api/health" },
@@ -82,7 +83,7 @@ export function createApp(ctx: AppContext): Express {
   const api = express.Router();
   api.use(express.json({ limit: "512kb" }));
   api.use(loadSession(ctx.auth));
-  api.use(originCheck([ctx.config.publicUrl]));
+  api.use(originCheck({ origins: ctx.config.allowedOrigins }));
   api.use(dealershipDay(async (user) => {
     const dealership = await getDealership(ctx.database.db, user.dealershipId);
     return { dealership, today: todayFor(ctx, dealership) };
