@@ -92,4 +92,6 @@ export const photoUpdateSchema = z.strictObject({
   isCover: z.literal(true).optional(),
 });
 
+export type PhotoUpdateInput = z.infer<typeof photoUpdateSchema>;
+
 export const photoOrderSchema = z.strictObject({ order: z.array(z.number().int().positive()).min(1).max(100) });

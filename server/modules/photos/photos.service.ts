@@ -1,3 +1,4 @@
+import type { PhotoUpdateInput } from "../../../shared/schemas/evidence.ts";
 import { and, eq, inArray, ne } from "drizzle-orm";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
@@ -106,12 +107,7 @@ export async function upload(ctx: AppContext, actor: User, vehicleId: number, fi
   return { accepted, refused };
 }
 
-export interface PhotoChanges {
-  version: number;
-  caption?: string;
-  zone?: string | null;
-  isCover?: true;
-}
+export type PhotoChanges = PhotoUpdateInput;
 
 export async function update(ctx: AppContext, actor: User, vehicleId: number, photoId: number, input: PhotoChanges) {
   await requireVehicle(ctx, actor, vehicleId);
@@ -122,7 +118,7 @@ export async function update(ctx: AppContext, actor: User, vehicleId: number, ph
     if (input.isCover) await tx.update(photos).set({ isCover: false }).where(and(eq(photos.vehicleId, vehicleId), ne(photos.id, photoId)));
     const set = {
       ...(input.caption !== undefined ? { caption: input.caption } : {}),
-      ...(input.zone !== undefined ? { zone: input.zone as never } : {}),
+      ...(input.zone !== undefined ? { zone: input.zone } : {}),
       ...(input.isCover ? { isCover: true } : {}),
     };
     await tx.update(photos).set({ ...set, version: current.version + 1 }).where(eq(photos.id, photoId));
