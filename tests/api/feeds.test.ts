@@ -113,7 +113,8 @@ describe("creating a feed", () => {
     expect(res.body.preview.columns).toEqual([{ key: "stockNumber", header: "Stock" }, { key: "model", header: "Model" }]);
     expect(res.body.preview.rows).toContainEqual([plain.stockNumber, "Brindle"]);
     expect(res.body.preview.total).toBe(1);
-    expect(res.body.preview.sample.startsWith("Stock,Model\r\n")).toBe(true);
+    // The sample is the feed's own text: the status and page URL a feed always carries follow the chosen columns.
+    expect(res.body.preview.sample.startsWith("Stock,Model,status,url\r\n")).toBe(true);
     expect((await m.get("/api/feeds")).body.feeds.length).toBe(before);
   });
 });
@@ -295,8 +296,11 @@ describe("incremental sync and validators", () => {
     expect(Date.parse(gone.removedAt)).toBeGreaterThan(Date.parse(mark));
 
     const csv = parseCsv<Record<string, string>>((await request(app).get(`${csvPath}?since=${encodeURIComponent(mark)}`)).text, { columns: true });
-    // With since, the stock number, status and URL are added when the feed lacks them.
+    // The stock number, status and URL are added when the feed lacks them, with and without since (issue 16: a
+    // parser reading columns by position must find the same columns in both).
     expect(Object.keys(csv[0])).toEqual(["Model", "stockNumber", "status", "url"]);
+    const wholeCsv = parseCsv<Record<string, string>>((await request(app).get(csvPath)).text, { columns: true });
+    expect(Object.keys(wholeCsv[0])).toEqual(["Model", "stockNumber", "status", "url"]);
     expect(csv.find((r) => r.stockNumber === plain.stockNumber)).toEqual({ Model: "", stockNumber: plain.stockNumber, status: "removed", url: plain.url });
     expect(csv.find((r) => r.stockNumber === freshStock)).toMatchObject({ Model: "Quarrel", status: "live" });
 
@@ -329,13 +333,22 @@ describe("the fetch log", () => {
     }
   });
 
-  it("when marketing downloads a feed from the staff area, then it gets the portal's output as an attachment, and no portal fetch is logged", async () => {
+  it("when marketing downloads a feed from the staff area, then it gets the portal's output as an attachment with a BOM, and no portal fetch is logged", async () => {
     const { m, feed, path } = await createFeed({ name: "Fernhollow — Ωmega feed", format: "csv", filter: { makes: ["Ambrel"] } });
-    const portal = await request(app).get(path);
-    const dl = await m.get(`/api/feeds/${feed.id}/download`);
+    const raw = (r: request.Test) => r.buffer(true).parse((s, cb) => {
+      const chunks: Buffer[] = [];
+      s.on("data", (c: Buffer) => chunks.push(c));
+      s.on("end", () => cb(null, Buffer.concat(chunks)));
+    });
+    const portal = (await raw(request(app).get(path))).body as Buffer;
+    const dl = await raw(m.get(`/api/feeds/${feed.id}/download`));
     expect(dl.status).toBe(200);
     expect(dl.headers["content-disposition"]).toMatch(/^attachment; filename=".+\.csv"; filename\*=UTF-8''Fernhollow-%CE%A9mega-feed\.csv$/);
-    expect(dl.text).toBe(portal.text);
+    // The staff download opens right in spreadsheet programs: UTF-8 with a byte order mark (EF BB BF) before the
+    // portal's bytes; the portal's own has none (portal feeds unchanged).
+    const BOM = Buffer.from([0xef, 0xbb, 0xbf]);
+    expect(portal.subarray(0, 3).equals(BOM)).toBe(false);
+    expect((dl.body as Buffer).equals(Buffer.concat([BOM, portal]))).toBe(true);
     const listed = (await m.get(`/api/feeds/${feed.id}`)).body.feed;
     expect(listed.fetches).toHaveLength(1);
   });

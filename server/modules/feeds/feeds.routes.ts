@@ -33,12 +33,15 @@ export function feedsRoutes(ctx: AppContext): Router {
 
   router.delete("/:id", ...route({ allow: "feeds.manage", params: idParams, status: 204 }, ({ user, params }) => service.revoke(ctx, user, params.id)));
 
-  /** The same output a portal gets, for a signed-in person to save; not logged as a portal fetch. */
+  /**
+   * The same output a portal gets, for a signed-in person to save; not logged as a portal fetch. A CSV starts with a
+   * byte order mark here only: a spreadsheet program opening the file then reads UTF-8 (portals parse without one).
+   */
   router.get(
     "/:id/download",
     ...route({ allow: "feeds.manage", params: idParams }, async ({ user, params, res }) => {
       const feed = await service.feedForDownload(ctx, user, params.id);
-      const stream = await service.openFeedStream(ctx, feed);
+      const stream = await service.openFeedStream(ctx, feed, undefined, { bom: true });
       res.setHeader("Content-Disposition", `attachment; filename="${fileName(feed.name, feed.format).replace(/[^\x20-\x7e]/g, "_")}"; filename*=UTF-8''${encodeURIComponent(fileName(feed.name, feed.format))}`);
       res.setHeader("Cache-Control", "no-store");
       sendFeed(res, stream);

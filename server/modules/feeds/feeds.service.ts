@@ -129,11 +129,14 @@ export async function feedForDownload(ctx: AppContext, actor: User, id: number):
   return f;
 }
 
-/** The columns a response writes: with since, the stock number, status and URL are always there, so removals say which car. */
-function columnsOf(spec: Pick<FeedSpec, "format" | "columns">, since?: Date): FeedColumn[] {
+/**
+ * The columns a response writes: the chosen ones, then the stock number, status and URL when they are missing, so a
+ * removal (with since) says which car. The same with and without since, so a parser reading by position never
+ * finds a column that comes and goes (issue 16).
+ */
+function columnsOf(spec: Pick<FeedSpec, "format" | "columns">): FeedColumn[] {
   if (!FORMATS_WITH_COLUMNS.includes(spec.format)) return ALL_COLUMNS;
   const cols = effectiveColumns(spec.columns);
-  if (!since) return cols;
   const missing = (["stockNumber", "status", "url"] as const).filter((k) => !cols.some((c) => c.key === k));
   return [...cols, ...missing.map((key) => ({ key, header: cols.some((c) => c.header === key) ? `${key}_` : key }))];
 }
@@ -150,7 +153,7 @@ export async function validators(ctx: AppContext, spec: FeedSpec, since?: Date):
   const fp = fingerprintSelect(spec.dealershipId, spec.filter, now);
   const [rows] = await ctx.database.pool.query(fp.sql, fp.params);
   const r = (rows as Array<{ n: number | string; x: number | string; m: Date | null }>)[0] ?? { n: 0, x: 0, m: null };
-  const today = dependsOnToday(columnsOf(spec, since)) ? now.toISOString().slice(0, 10) : "";
+  const today = dependsOnToday(columnsOf(spec)) ? now.toISOString().slice(0, 10) : "";
   const key = [spec.id, spec.version, spec.updatedAt.getTime(), spec.format, r.n, r.x, r.m ? new Date(r.m).getTime() : 0, since?.getTime() ?? "", today, ctx.config.publicUrl].join(":");
   const etag = `W/"${createHash("sha256").update(key).digest("base64url").slice(0, 27)}"`;
   let last = Math.max(spec.updatedAt.getTime(), r.m ? new Date(r.m).getTime() : 0);
@@ -188,7 +191,7 @@ export interface FeedStream {
  * One pipeline, so back-pressure reaches the database (mysql2 pauses the socket) and memory stays flat; if the
  * client goes away the pipeline is torn down and the connection destroyed rather than returned mid-result.
  */
-export async function openFeedStream(ctx: AppContext, spec: FeedSpec, since?: Date): Promise<FeedStream> {
+export async function openFeedStream(ctx: AppContext, spec: FeedSpec, since?: Date, options: { bom?: boolean } = {}): Promise<FeedStream> {
   const d = await getDealership(ctx.database.db, spec.dealershipId);
   const cells = cellContext(ctx, spec, d);
   const q = feedSelect(spec.dealershipId, spec.filter, cells.now, since);
@@ -214,7 +217,7 @@ export async function openFeedStream(ctx: AppContext, spec: FeedSpec, since?: Da
       cb(null, chunk);
     },
   });
-  const stages = writerFor({ format: spec.format, columns: columnsOf(spec, since), cells, name: spec.name, since });
+  const stages = writerFor({ format: spec.format, columns: columnsOf(spec), cells, name: spec.name, since, bom: options.bom });
   pipeline([source, toItems, ...stages, counter], (err) => {
     if (err) conn.destroy();
     else conn.release();

@@ -1,12 +1,14 @@
 // One Transform per format: feed items in (objects), UTF-8 text out. CSV is written by csv-stringify (RFC 4180: CRLF,
-// fields with commas, quotes or line breaks quoted, quotes doubled); XML by xmlbuilder2's streaming writer, which
+// fields with commas, quotes or line breaks quoted, quotes doubled), every cell and header through csv-cell.ts so no
+// cell starts a spreadsheet formula; XML by xmlbuilder2's streaming writer, which
 // escapes text and attributes; JSON and JSON-LD by JSON.stringify, item by item. Nothing holds more than one item.
 import { Transform, type TransformCallback } from "node:stream";
 import { stringify } from "csv-stringify";
 import { createCB } from "xmlbuilder2";
 import type { FeedColumn, FeedFormat } from "../../../shared/schemas/feeds.ts";
 import { carJsonLd } from "../publishing/seo.ts";
-import { ALL_COLUMNS, cellOf, pageUrl, removedCell, xmlSafe, type Cell, type CellContext, type FeedRow, type RemovedRow } from "./columns.ts";
+import { ALL_COLUMNS, cellOf, pageUrl, removedCell, xmlSafe, type CellContext, type FeedRow, type RemovedRow } from "./columns.ts";
+import { csvCell, NEUTRALISED, neutralise } from "./csv-cell.ts";
 
 export type FeedItem = { kind: "row"; row: FeedRow } | { kind: "removed"; row: RemovedRow };
 
@@ -16,6 +18,8 @@ export interface WriterOptions {
   cells: CellContext;
   name: string;
   since?: Date;
+  /** A UTF-8 byte order mark first (CSV only): spreadsheet programs then read the text as UTF-8, not a legacy code page. */
+  bom?: boolean;
 }
 
 export const CONTENT_TYPES: Record<FeedFormat, string> = {
@@ -24,9 +28,6 @@ export const CONTENT_TYPES: Record<FeedFormat, string> = {
   jsonld: "application/ld+json; charset=utf-8",
   xml: "application/xml; charset=utf-8",
 };
-
-/** A CSV cell: lists joined with "|" (photo URLs are percent-encoded, so never contain one), nothing for null. */
-const csvCell = (v: Cell) => (v == null ? "" : Array.isArray(v) ? v.join("|") : String(v));
 
 /** The CSV writer: items to records, then csv-stringify. Two stages of the one pipeline. */
 export function csvWriter(o: WriterOptions): Transform[] {
@@ -37,7 +38,9 @@ export function csvWriter(o: WriterOptions): Transform[] {
       cb(null, o.columns.map((col) => csvCell(item.kind === "row" ? cellOf(item.row, o.cells, col) : removedCell(item.row, o.cells, col))));
     },
   });
-  return [toRecord, stringify({ header: true, columns: o.columns.map((c) => c.header), record_delimiter: "\r\n", eof: true })];
+  // Headers are chosen by staff, so they are neutralised like the cells.
+  const columns = o.columns.map((c) => neutralise(c.header));
+  return [toRecord, stringify({ header: true, columns, record_delimiter: "\r\n", eof: true, quoted_match: NEUTRALISED, bom: o.bom === true })];
 }
 
 /** Feeds its own items through a Transform whose output is text pushed by the format. */
