@@ -1,10 +1,24 @@
 import { createBrowserRouter, Navigate, useParams, type RouteObject } from "react-router";
 import { RouteError } from "./routes/route-error.tsx";
 import { Loading } from "../components/feedback/Notice.tsx";
+import type { Action } from "../../shared/permissions.ts";
 
-/** Each page is its own lazy module, so the public pages never download the staff area's code. */
-const page = (load: () => Promise<{ default: React.ComponentType }>): Pick<RouteObject, "lazy"> => ({
-  lazy: async () => ({ Component: (await load()).default }),
+/**
+ * Each page is its own lazy module, so the public pages never download the staff area's code. A staff page that
+ * is for one action (shared/permissions.ts) names it here: other roles see RequireAction's notice instead.
+ */
+const page = (load: () => Promise<{ default: React.ComponentType }>, allow?: Action): Pick<RouteObject, "lazy"> => ({
+  lazy: async () => {
+    if (!allow) return { Component: (await load()).default };
+    const [{ default: Page }, { RequireAction }] = await Promise.all([load(), import("./RequireAction.tsx")]);
+    return {
+      element: (
+        <RequireAction action={allow}>
+          <Page />
+        </RequireAction>
+      ),
+    };
+  },
 });
 
 /** Older revisions open on the condition page itself (?revision=N); this address keeps links in mails working. */
@@ -45,10 +59,10 @@ export const routes: RouteObject[] = [
           },
           { path: "leads", ...page(() => import("./routes/leads.tsx")) },
           { path: "leads/:id", ...page(() => import("./routes/lead-detail.tsx")) },
-          { path: "mail", ...page(() => import("./routes/mail-outbox.tsx")) },
-          { path: "feeds", ...page(() => import("./routes/feeds.tsx")) },
-          { path: "users", ...page(() => import("./routes/users.tsx")) },
-          { path: "settings", ...page(() => import("./routes/settings.tsx")) },
+          { path: "mail", ...page(() => import("./routes/mail-outbox.tsx"), "mail.read") },
+          { path: "feeds", ...page(() => import("./routes/feeds.tsx"), "feeds.manage") },
+          { path: "users", ...page(() => import("./routes/users.tsx"), "users.manage") },
+          { path: "settings", ...page(() => import("./routes/settings.tsx"), "dealership.edit") },
           { path: "*", ...page(() => import("./routes/not-found.tsx")) },
         ],
       },

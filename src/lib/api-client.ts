@@ -43,7 +43,8 @@ export async function api<T>(method: Method, path: string, body?: unknown, init:
   return data as T;
 }
 
-function safeJson(text: string): unknown {
+/** A body read as JSON, or null when it is not JSON (a proxy's HTML error page, say). */
+export function safeJson(text: string): unknown {
   try {
     return JSON.parse(text);
   } catch {

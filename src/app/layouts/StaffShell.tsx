@@ -76,7 +76,7 @@ export default function StaffShell() {
           <button
             type="button"
             className="min-h-11 rounded-md px-3 font-bold text-signal hover:bg-signal-wash"
-            onClick={() => signOut.mutate(undefined, { onSettled: () => navigate("/sign-in", { replace: true }) })}
+            onClick={() => signOut.mutate(undefined, { onSettled: () => void navigate("/sign-in", { replace: true }) })}
           >
             Sign out
           </button>

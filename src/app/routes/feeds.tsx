@@ -1,5 +1,4 @@
 import { useState } from "react";
-import { RequireAction } from "../RequireAction.tsx";
 import { useFeeds } from "../../features/feeds/api/feeds.ts";
 import { FeedCard } from "../../features/feeds/components/FeedCard.tsx";
 import { FeedForm } from "../../features/feeds/components/FeedForm.tsx";
@@ -7,7 +6,8 @@ import { SecretUrl } from "../../features/feeds/components/SecretUrl.tsx";
 import { PageHeader, Panel } from "../../components/ui/Page.tsx";
 import { EmptyState, Loading, Notice } from "../../components/feedback/Notice.tsx";
 
-function FeedsPage() {
+/** Guarded by its action in app/router.tsx. */
+export default function FeedsPage() {
   const feeds = useFeeds();
   const [secret, setSecret] = useState<string | null>(null);
   return (
@@ -31,13 +31,5 @@ function FeedsPage() {
         </Panel>
       </div>
     </>
-  );
-}
-
-export default function FeedsRoute() {
-  return (
-    <RequireAction action="feeds.manage">
-      <FeedsPage />
-    </RequireAction>
   );
 }

@@ -29,7 +29,7 @@ function Inbox() {
 
   const change = (f: LeadFilters) => {
     const next = new URLSearchParams();
-    for (const [k, v] of Object.entries(f)) if (v) next.set(k, v);
+    for (const [k, v] of Object.entries(f)) if (typeof v === "string" && v) next.set(k, v);
     setParams(next);
   };
 

@@ -1,4 +1,3 @@
-import { RequireAction } from "../RequireAction.tsx";
 import { useOutbox, useRetryOutbox } from "../../features/mail/api/mail.ts";
 import { OutboxTable } from "../../features/mail/components/OutboxTable.tsx";
 import { CapturedMail } from "../../features/mail/components/CapturedMail.tsx";
@@ -6,7 +5,8 @@ import { PageHeader } from "../../components/ui/Page.tsx";
 import { Button } from "../../components/ui/Button.tsx";
 import { EmptyState, Loading, Notice } from "../../components/feedback/Notice.tsx";
 
-function MailPage() {
+/** Guarded by its action in app/router.tsx. */
+export default function MailPage() {
   const outbox = useOutbox();
   const retry = useRetryOutbox();
   const waiting = outbox.data?.outbox.filter((m) => m.status !== "sent").length ?? 0;
@@ -40,20 +40,13 @@ function MailPage() {
           <section aria-labelledby="captured-h">
             <h2 id="captured-h" className="mb-1 text-lg font-bold">Captured by the demo mail catcher</h2>
             <p className="mb-3 max-w-prose text-sm text-ink-soft">
-              Demo mode only. No mail server is set up, so Forthright's own catcher receives every mail and keeps it here; nothing reaches a real inbox. With a mail server configured this list does not exist.
+              Demo mode only. No mail server is set up, so Forthright's own catcher receives every mail and keeps it here; nothing reaches
+              a real inbox. With a mail server configured this list does not exist.
             </p>
             <CapturedMail />
           </section>
         ) : null}
       </div>
     </>
-  );
-}
-
-export default function MailOutboxRoute() {
-  return (
-    <RequireAction action="mail.read">
-      <MailPage />
-    </RequireAction>
   );
 }

@@ -51,5 +51,5 @@ export default function PublicVehicleRoute() {
   if (shown.isPending) return <PageLoading label="Loading the condition report…" />;
   if (status === 410) return <Withdrawn dealership={dealership} />;
   if (status === 404) return <NotFound dealership={dealership} what={wanted !== null && current.isSuccess ? "revision" : "vehicle"} />;
-  return <LoadFailed dealership={dealership} message={failed?.message ?? "Something went wrong."} onRetry={() => shown.refetch()} />;
+  return <LoadFailed dealership={dealership} message={failed?.message ?? "Something went wrong."} onRetry={() => void shown.refetch()} />;
 }

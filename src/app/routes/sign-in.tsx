@@ -1,8 +1,7 @@
 import { Link, Navigate, useNavigate, useSearchParams } from "react-router";
 import { useSession, useSignIn } from "../../lib/auth.ts";
-import { isApiError } from "../../lib/api-client.ts";
 import { TextField } from "../../components/form/Field.tsx";
-import { onSubmitOf, setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, topError, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { Wordmark } from "../../components/ui/Page.tsx";
@@ -23,7 +22,7 @@ export default function SignIn() {
   if (session.data?.user) return <Navigate to={next} replace />;
 
   const error = signIn.error;
-  const fields = isApiError(error) ? error.fields : {};
+  const problem = topError(error);
 
   const submit = form.handleSubmit((values) =>
     signIn.mutate(values, { onSuccess: () => void navigate(next, { replace: true }), onError: (e) => setServerErrors(form, e) }),
@@ -35,9 +34,9 @@ export default function SignIn() {
       <h1 className="mt-8 text-3xl font-bold">Staff sign-in</h1>
       <p className="mt-2 text-ink-soft">For the dealership's team. Buyers don't need an account.</p>
       <form onSubmit={onSubmitOf(submit)} noValidate className="mt-8 flex flex-col gap-5" aria-describedby={error ? "sign-in-error" : undefined}>
-        {error && !Object.keys(fields).length ? (
+        {problem ? (
           <div id="sign-in-error">
-            <Notice tone="danger" title={error.message} />
+            <Notice tone="danger" title={problem.message} />
           </div>
         ) : null}
         <TextField

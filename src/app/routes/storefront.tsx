@@ -1,4 +1,4 @@
-import { useEffect, useState, type FormEvent } from "react";
+import type { FormEvent } from "react";
 import { useSearchParams } from "react-router";
 import { useQuery } from "@tanstack/react-query";
 import { storefrontDealershipQueryOptions, storefrontListQueryOptions } from "../../features/storefront/api/storefront.ts";
@@ -10,6 +10,7 @@ import { Pagination } from "../../features/storefront/components/Pagination.tsx"
 import { useDocumentTitle } from "../../features/storefront/components/useDocumentTitle.ts";
 import { count, label, telHref } from "../../features/storefront/format.ts";
 import { EmptyState, Loading, Notice } from "../../components/feedback/Notice.tsx";
+import { useDraft } from "../../components/form/use-draft.ts";
 import { formatNumber } from "../../../shared/domain/display.ts";
 import type { PublicSort } from "../../../shared/schemas/public-query.ts";
 import "../../print.css";
@@ -27,8 +28,7 @@ export default function Storefront() {
   const dealership = list.data?.dealership ?? known;
   const locale = dealership?.locale || "en";
 
-  const [q, setQ] = useState(filters.q);
-  useEffect(() => setQ(filters.q), [filters.q]);
+  const [q, setQ] = useDraft(filters.q);
 
   useDocumentTitle(dealership ? `Vehicles for sale — ${dealership.name}` : "Vehicles for sale");
 
@@ -99,7 +99,7 @@ export default function Storefront() {
                 <select
                   className="min-h-11 rounded-md border border-line-strong bg-paper-raised px-3 text-base font-normal"
                   value={filters.sort}
-                  onChange={(e) => change({ sort: e.target.value as PublicSort })}
+                  onChange={(e) => change({ sort: e.target.value })}
                 >
                   {(Object.keys(SORT_LABELS) as PublicSort[]).map((s) => (
                     <option key={s} value={s}>
@@ -131,7 +131,7 @@ export default function Storefront() {
               ) : list.isError && !data ? (
                 <Notice tone="danger" title="The vehicles could not be loaded">
                   <p>{list.error.message}</p>
-                  <button type="button" className="mt-2 font-bold text-signal underline" onClick={() => list.refetch()}>
+                  <button type="button" className="mt-2 font-bold text-signal underline" onClick={() => void list.refetch()}>
                     Try again
                   </button>
                 </Notice>

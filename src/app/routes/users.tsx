@@ -1,4 +1,4 @@
-import { RequireAction, useStaffUser } from "../RequireAction.tsx";
+import { useStaffUser } from "../RequireAction.tsx";
 import { useUsers } from "../../features/users/api/users.ts";
 import { UsersTable } from "../../features/users/components/UsersTable.tsx";
 import { AddUserForm } from "../../features/users/components/AddUserForm.tsx";
@@ -6,7 +6,8 @@ import { InviteForm } from "../../features/accounts/InviteForm.tsx";
 import { PageHeader, Panel } from "../../components/ui/Page.tsx";
 import { Loading, Notice } from "../../components/feedback/Notice.tsx";
 
-function UsersPage() {
+/** Guarded by its action in app/router.tsx. */
+export default function UsersPage() {
   const me = useStaffUser();
   const users = useUsers();
   return (
@@ -23,13 +24,5 @@ function UsersPage() {
         </Panel>
       </div>
     </>
-  );
-}
-
-export default function UsersRoute() {
-  return (
-    <RequireAction action="users.manage">
-      <UsersPage />
-    </RequireAction>
   );
 }

@@ -1,10 +1,11 @@
-import { useEffect, useState, type FormEvent } from "react";
+import { useState, type FormEvent, type ReactNode } from "react";
 import { Link, useSearchParams } from "react-router";
 import { useQuery } from "@tanstack/react-query";
 import { useVehicleList, suggestionsQueryOptions } from "../../features/vehicles/api/vehicles.ts";
 import { StockTable } from "../../features/vehicles/components/StockTable.tsx";
 import { useDealership } from "../../features/settings/api/dealership.ts";
 import { useStaffUser } from "../RequireAction.tsx";
+import { useDraft } from "../../components/form/use-draft.ts";
 import { can } from "../../../shared/permissions.ts";
 import { PageHeader } from "../../components/ui/Page.tsx";
 import { Button } from "../../components/ui/Button.tsx";
@@ -13,6 +14,7 @@ import { FUEL_TYPES, LABELS, VEHICLE_STATUSES } from "../../../shared/constants/
 import { SORTS, type VehicleListQuery, type VehicleSort } from "../../../shared/schemas/vehicles.ts";
 
 const PAGE_SIZE = 25;
+const input = "min-h-11 rounded-md border border-line-strong bg-paper-raised px-3";
 const whole = (s: string | null) => (s && /^\d+$/.test(s) ? Number(s) : undefined);
 
 /** The URL is the state: every filter, the sort and the page live in the query string, so a link reproduces the view. */
@@ -35,7 +37,10 @@ function useFilters() {
   };
   const set = (changes: Record<string, string | undefined>, resetPage = true) => {
     const next = new URLSearchParams(params);
-    for (const [k, v] of Object.entries(changes)) v ? next.set(k, v) : next.delete(k);
+    for (const [k, v] of Object.entries(changes)) {
+      if (v) next.set(k, v);
+      else next.delete(k);
+    }
     if (resetPage && !("page" in changes)) next.delete("page");
     setParams(next, { replace: false });
   };
@@ -48,8 +53,8 @@ export default function VehiclesRoute() {
   const list = useVehicleList(api);
   const dealership = useDealership();
   const makes = useQuery(suggestionsQueryOptions(""));
-  const [q, setQ] = useState(params.get("q") ?? "");
-  useEffect(() => setQ(params.get("q") ?? ""), [params]);
+  // Any change to the URL puts the box back to the search it holds.
+  const [q, setQ] = useDraft(params.get("q") ?? "", params.toString());
 
   const currency = dealership.data?.dealership.currency ?? "AUD";
   const locale = dealership.data?.dealership.locale ?? "en";
@@ -63,7 +68,6 @@ export default function VehiclesRoute() {
     set({ q: q.trim() || undefined });
   }
 
-  const input = "min-h-11 rounded-md border border-line-strong bg-paper-raised px-3";
   return (
     <>
       <PageHeader
@@ -82,29 +86,17 @@ export default function VehiclesRoute() {
       </Button>
       <fieldset id="stock-filters" className={`mb-6 gap-3 rounded-lg border border-line bg-paper-raised p-4 sm:grid sm:grid-cols-2 lg:grid-cols-4 ${showFilters ? "grid" : "hidden"}`}>
         <legend className="px-1 text-sm font-bold">Filters</legend>
-        <label className="flex flex-col gap-1 text-sm font-bold">
-          Status
-          <select className={input} value={params.get("status") ?? ""} onChange={(e) => set({ status: e.target.value || undefined })}>
-            <option value="">Any status</option>
-            <option value="intake,preparing">In preparation</option>
-            <option value="live,reserved">On sale (live or reserved)</option>
-            {VEHICLE_STATUSES.map((s) => <option key={s} value={s}>{LABELS.status[s]}</option>)}
-          </select>
-        </label>
-        <label className="flex flex-col gap-1 text-sm font-bold">
-          Make
-          <select className={input} value={params.get("make") ?? ""} onChange={(e) => set({ make: e.target.value || undefined })}>
-            <option value="">Any make</option>
-            {(makes.data?.makes ?? []).map((m) => <option key={m} value={m}>{m}</option>)}
-          </select>
-        </label>
-        <label className="flex flex-col gap-1 text-sm font-bold">
-          Fuel
-          <select className={input} value={params.get("fuel") ?? ""} onChange={(e) => set({ fuel: e.target.value || undefined })}>
-            <option value="">Any fuel</option>
-            {FUEL_TYPES.map((f) => <option key={f} value={f}>{LABELS.fuelType[f]}</option>)}
-          </select>
-        </label>
+        <ParamMenu label="Status" any="Any status" value={params.get("status")} onChange={(status) => set({ status })}>
+          <option value="intake,preparing">In preparation</option>
+          <option value="live,reserved">On sale (live or reserved)</option>
+          {VEHICLE_STATUSES.map((s) => <option key={s} value={s}>{LABELS.status[s]}</option>)}
+        </ParamMenu>
+        <ParamMenu label="Make" any="Any make" value={params.get("make")} onChange={(make) => set({ make })}>
+          {(makes.data?.makes ?? []).map((m) => <option key={m} value={m}>{m}</option>)}
+        </ParamMenu>
+        <ParamMenu label="Fuel" any="Any fuel" value={params.get("fuel")} onChange={(fuel) => set({ fuel })}>
+          {FUEL_TYPES.map((f) => <option key={f} value={f}>{LABELS.fuelType[f]}</option>)}
+        </ParamMenu>
         <label className="flex flex-col gap-1 text-sm font-bold">
           Sort
           <select className={input} value={sort} onChange={(e) => set({ sort: e.target.value })}>
@@ -156,13 +148,31 @@ export default function VehiclesRoute() {
   );
 }
 
+interface ParamMenuProps {
+  label: string;
+  any: string;
+  value: string | null;
+  onChange: (v?: string) => void;
+  children: ReactNode;
+}
+
+/** A filter menu over one URL parameter; its first choice, "any", takes the parameter away. */
+function ParamMenu({ label, any, value, onChange, children }: ParamMenuProps) {
+  return (
+    <label className="flex flex-col gap-1 text-sm font-bold">
+      {label}
+      <select className={input} value={value ?? ""} onChange={(e) => onChange(e.target.value || undefined)}>
+        <option value="">{any}</option>
+        {children}
+      </select>
+    </label>
+  );
+}
+
 function RangeFilter({ label, from, to, onApply }: { label: string; from: string | null; to: string | null; onApply: (a?: string, b?: string) => void }) {
-  const [a, setA] = useState(from ?? "");
-  const [b, setB] = useState(to ?? "");
-  useEffect(() => {
-    setA(from ?? "");
-    setB(to ?? "");
-  }, [from, to]);
+  const both = JSON.stringify([from, to]);
+  const [a, setA] = useDraft(from ?? "", both);
+  const [b, setB] = useDraft(to ?? "", both);
   const apply = () => onApply(a.replace(/\D/g, "") || undefined, b.replace(/\D/g, "") || undefined);
   const cls = "min-h-11 w-full rounded-md border border-line-strong bg-paper-raised px-3 figures";
   return (

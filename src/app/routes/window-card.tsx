@@ -24,5 +24,5 @@ export default function WindowCardRoute() {
   if (current.isPending) return <PageLoading label="Loading the window card…" />;
   if (status === 410) return <Withdrawn dealership={dealership} />;
   if (status === 404) return <NotFound dealership={dealership} />;
-  return <LoadFailed dealership={dealership} message={failed?.message ?? "Something went wrong."} onRetry={() => current.refetch()} />;
+  return <LoadFailed dealership={dealership} message={failed?.message ?? "Something went wrong."} onRetry={() => void current.refetch()} />;
 }

@@ -23,21 +23,34 @@ function Frame({ id, label, error, hint, after, children }: FieldFrame & { id: s
         {children}
         {after}
       </div>
+      <FieldNotes id={id} error={error} hint={hint} />
+    </div>
+  );
+}
+
+/**
+ * Under a field: its hint, which its error replaces when there is one. `announce` makes the error an alert; a screen
+ * with many fields that reports them together (the checks screen's status line) turns it off.
+ */
+export function FieldNotes({ id, error, hint, announce = true }: { id: string; error?: string; hint?: ReactNode; announce?: boolean }) {
+  return (
+    <>
       {hint && !error ? (
         <p id={`${id}-hint`} className="text-xs text-ink-soft">
           {hint}
         </p>
       ) : null}
       {error ? (
-        <p id={`${id}-error`} className="text-sm font-bold text-brick" role="alert">
+        <p id={`${id}-error`} className="text-sm font-bold text-brick" role={announce ? "alert" : undefined}>
           {error}
         </p>
       ) : null}
-    </div>
+    </>
   );
 }
 
-const describedBy = (id: string, error?: string, hint?: ReactNode) =>
+/** The notes an input's `aria-describedby` names: the ids FieldNotes gives them. */
+export const describedBy = (id: string, error?: string, hint?: ReactNode) =>
   [error ? `${id}-error` : null, hint && !error ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
 
 export function TextField({ label, error, hint, after, className = "", ...rest }: FieldFrame & InputHTMLAttributes<HTMLInputElement> & WithRef<HTMLInputElement>) {

@@ -47,6 +47,11 @@ export function setServerErrors<V extends FieldValues>(form: Pick<UseFormReturn<
   for (const [key, message] of Object.entries(error.fields)) form.setError(key as Path<V>, { type: "server", message });
 }
 
+/** A mutation's error when it belongs at the top of the form: one that names no field, so no input shows it. */
+export function topError<E extends Error>(error: E | null): E | null {
+  return error && !(isApiError(error) && Object.keys(error.fields).length) ? error : null;
+}
+
 /** The message RHF holds for a dotted field path, for Field's `error`. */
 export function messageAt(errors: object, path: string): string | undefined {
   let node: unknown = errors;

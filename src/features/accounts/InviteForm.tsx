@@ -1,8 +1,7 @@
 import { useState } from "react";
 import { useInvite } from "./api/accounts.ts";
-import { isApiError } from "../../lib/api-client.ts";
 import { SelectField, TextField } from "../../components/form/Field.tsx";
-import { onSubmitOf, setServerErrors, useZodForm } from "../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, topError, useZodForm } from "../../components/form/use-zod-form.ts";
 import { Button } from "../../components/ui/Button.tsx";
 import { Notice } from "../../components/feedback/Notice.tsx";
 import { ROLES, ROLE_LABELS, type Role } from "../../../shared/constants/roles.ts";
@@ -16,8 +15,7 @@ export function InviteForm() {
   const form = useZodForm(inviteSchema, { defaultValues: blank });
   const { errors } = form.formState;
   const [sent, setSent] = useState<string | null>(null);
-  const error = invite.error;
-  const fields = isApiError(error) ? error.fields : {};
+  const problem = topError(invite.error);
   // Typing again means the last "sent" is no longer news.
   const field = (key: keyof typeof blank) => form.register(key, { onChange: () => setSent(null) });
   const role = form.watch("role");
@@ -41,9 +39,9 @@ export function InviteForm() {
           </Notice>
         </div>
       ) : null}
-      {error && !Object.keys(fields).length ? (
+      {problem ? (
         <div className="sm:col-span-2">
-          <Notice tone="danger" title="No invitation sent">{error.message}</Notice>
+          <Notice tone="danger" title="No invitation sent">{problem.message}</Notice>
         </div>
       ) : null}
       <TextField label="Name" {...field("name")} error={errors.name?.message} autoComplete="off" />

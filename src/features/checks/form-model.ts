@@ -36,7 +36,7 @@ const emptyTyre = (): TyreForm => ({ treadInnerMm: "", treadCentreMm: "", treadO
 export function tyresFormFrom(view: TyresView, today: string): TyresForm {
   const tyres = Object.fromEntries(TYRE_POSITIONS.map((p) => [p, emptyTyre()])) as Record<TyrePosition, TyreForm>;
   for (const { reading } of view.readings) {
-    const p = reading.position as TyrePosition;
+    const p = reading.position;
     if (!tyres[p]) continue;
     // Tread is recorded to 1 dp (TRADE.md §2.5), so a stored 5 reads back as it was typed, "5.0".
     tyres[p] = Object.fromEntries(
@@ -50,7 +50,7 @@ export function checksFormFrom(view: ChecksSetView): ChecksForm {
   return Object.fromEntries(
     CHECK_ITEMS.map((item) => {
       const r = view.results.find((x) => x.item === item);
-      return [item, { result: (r?.result as CheckResultCode | undefined) ?? "", note: r?.note ?? "" }];
+      return [item, { result: r?.result ?? "", note: r?.note ?? "" }];
     }),
   ) as ChecksForm;
 }
@@ -74,21 +74,22 @@ export const tyreHasValue = (t: TyreForm) => TYRE_FIELDS.some((f) => t[f].trim()
 /** Positions that will be sent: each with at least one value; the spare only when it is being measured. */
 export const sentPositions = (form: TyresForm) => TYRE_POSITIONS.filter((p) => (p !== "spare" || form.spare) && tyreHasValue(form.tyres[p]));
 
-function readingBody(position: TyrePosition, t: TyreForm) {
+/** One tyre as a reading, its figures read by `figure`: as typed for the body, numbers only for the live figures. */
+function readingOf<N>(position: TyrePosition, t: TyreForm, figure: (value: string) => N) {
   return {
     position,
-    treadInnerMm: numberFrom(t.treadInnerMm),
-    treadCentreMm: numberFrom(t.treadCentreMm),
-    treadOuterMm: numberFrom(t.treadOuterMm),
+    treadInnerMm: figure(t.treadInnerMm),
+    treadCentreMm: figure(t.treadCentreMm),
+    treadOuterMm: figure(t.treadOuterMm),
     sizeDesignation: t.sizeDesignation.trim() || null,
     dotCode: t.dotCode.trim() || null,
-    pressureKpa: numberFrom(t.pressureKpa),
+    pressureKpa: figure(t.pressureKpa),
   };
 }
 
 export function tyresBody(form: TyresForm, version: number) {
   const positions = sentPositions(form);
-  return { positions, body: { version, measuredOn: form.measuredOn, readings: positions.map((p) => readingBody(p, form.tyres[p])) } };
+  return { positions, body: { version, measuredOn: form.measuredOn, readings: positions.map((p) => readingOf(p, form.tyres[p], numberFrom)) } };
 }
 
 export function checksBody(form: ChecksForm, version: number) {
@@ -145,7 +146,7 @@ export function validateTyres(form: TyresForm, version: number, today: string): 
 export function validateChecks(form: ChecksForm, version: number): { body: ChecksInput; items: CheckItem[]; errors: FieldErrors } {
   const { body, items } = checksBody(form, version);
   const parsed = checksSchema.safeParse(body);
-  return { body: parsed.success ? parsed.data : (body as ChecksInput), items, errors: parsed.success ? {} : checkErrorKeys(zodFields(parsed.error), items) };
+  return { body: parsed.success ? parsed.data : body, items, errors: parsed.success ? {} : checkErrorKeys(zodFields(parsed.error), items) };
 }
 
 export interface TyreRules {
@@ -153,17 +154,7 @@ export interface TyreRules {
   newTyreTreadMm: number;
 }
 
-export function liveReading(position: TyrePosition, t: TyreForm): TyreReading {
-  return {
-    position,
-    treadInnerMm: liveNumber(t.treadInnerMm),
-    treadCentreMm: liveNumber(t.treadCentreMm),
-    treadOuterMm: liveNumber(t.treadOuterMm),
-    sizeDesignation: t.sizeDesignation.trim() || null,
-    dotCode: t.dotCode.trim() || null,
-    pressureKpa: liveNumber(t.pressureKpa),
-  };
-}
+export const liveReading = (position: TyrePosition, t: TyreForm): TyreReading => readingOf(position, t, liveNumber);
 
 /** The same assessment the server makes on save, from what is typed now. */
 export function liveAssessment(position: TyrePosition, t: TyreForm, rules: TyreRules, measuredOn: string): TyreAssessment {

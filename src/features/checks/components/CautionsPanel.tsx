@@ -43,11 +43,7 @@ export function CautionsPanel({ saved, live, editing }: { saved: readonly Cautio
               check here.
             </p>
           ) : null}
-          <ul className="mt-2 flex flex-col gap-2">
-            {blocks.map((c) => (
-              <CautionItem key={c.code} caution={c} />
-            ))}
-          </ul>
+          <CautionList cautions={blocks} className="mt-2" />
         </div>
       ) : null}
       {advises.length ? (
@@ -69,14 +65,20 @@ export function CautionsPanel({ saved, live, editing }: { saved: readonly Cautio
               <span className="hidden group-open:inline">Hide</span>
             </span>
           </summary>
-          <ul className="mb-2 flex flex-col gap-2">
-            {advises.map((c) => (
-              <CautionItem key={c.code} caution={c} />
-            ))}
-          </ul>
+          <CautionList cautions={advises} className="mb-2" />
         </details>
       ) : null}
     </section>
+  );
+}
+
+function CautionList({ cautions, className }: { cautions: Shown[]; className: string }) {
+  return (
+    <ul className={`${className} flex flex-col gap-2`}>
+      {cautions.map((c) => (
+        <CautionItem key={c.code} caution={c} />
+      ))}
+    </ul>
   );
 }
 

@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState, type FormEvent, type ReactNode } from "react";
+import { useMemo, useRef, useState, type FormEvent, type ReactNode } from "react";
 import { CHECK_ITEMS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "../../../../shared/constants/evidence.ts";
 import { NOT_A_CERTIFICATE } from "../../../../shared/domain/cautions.ts";
 import { formatTreadDepth } from "../../../../shared/domain/display.ts";
@@ -15,6 +15,7 @@ import {
 } from "../form-model.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
+import { useUnsavedWarning } from "../../../components/form/use-unsaved-warning.ts";
 import { CautionsPanel } from "./CautionsPanel.tsx";
 import { CheckRow } from "./CheckRow.tsx";
 import { TyreCard } from "./TyreCard.tsx";
@@ -61,13 +62,7 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
   const dirty = tDirty || cDirty;
   const live = useMemo(() => liveCautions(tyres, checks, rules), [tyres, checks, rules]);
 
-  useEffect(() => {
-    const warn = (e: BeforeUnloadEvent) => {
-      if (dirty) e.preventDefault();
-    };
-    window.addEventListener("beforeunload", warn);
-    return () => window.removeEventListener("beforeunload", warn);
-  }, [dirty]);
+  useUnsavedWarning(dirty);
 
   function touched() {
     setNote(null);

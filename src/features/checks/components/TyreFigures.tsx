@@ -61,9 +61,10 @@ export function TyreFigures({ assessment: a, dotCode, rules, locale }: { assessm
       </Row>,
     );
   } else {
+    const margin = a.tread.marginMm === 0 ? <>at the {min} minimum, which passes; plan to replace it</> : <>above the {min} minimum</>;
     rows.push(
       <Row key="tread" label="Least tread">
-        <strong>Least {mm(a.tread.leastMm)}</strong> ({WHERE[a.tread.leastPosition]}) — {a.tread.marginMm === 0 ? <>at the {min} minimum, which passes; plan to replace it</> : <>above the {min} minimum</>}
+        <strong>Least {mm(a.tread.leastMm)}</strong> ({WHERE[a.tread.leastPosition]}) — {margin}
       </Row>,
     );
   }
@@ -136,7 +137,7 @@ export function TyreFigures({ assessment: a, dotCode, rules, locale }: { assessm
     } else if (a.ageYears == null) {
       rows.push(
         <Row key="age" label="Age" tone="faint">
-          {made ? `${made[0]!.toUpperCase()}${made.slice(1)}, after the measuring date. Check the code and the date.` : "Set the measuring date to work out the age."}
+          {made ? `${made[0].toUpperCase()}${made.slice(1)}, after the measuring date. Check the code and the date.` : "Set the measuring date to work out the age."}
         </Row>,
       );
     } else {
@@ -144,7 +145,8 @@ export function TyreFigures({ assessment: a, dotCode, rules, locale }: { assessm
       if (a.ageAdvisory === "strong") {
         rows.push(
           <Row key="age" label="Age" tone="advise">
-            <strong>Strong advisory: {years}</strong> ({made}). Road-safety guidance such as Ontario's Driver's Handbook says tyres should not be older than 10 years: replace it, or have it inspected before sale, whatever the tread.
+            <strong>Strong advisory: {years}</strong> ({made}). Road-safety guidance such as Ontario's Driver's Handbook says tyres
+            should not be older than 10 years: replace it, or have it inspected before sale, whatever the tread.
           </Row>,
         );
       } else if (a.ageAdvisory === "advise") {

@@ -1,4 +1,5 @@
 import { useId, type InputHTMLAttributes, type ReactNode } from "react";
+import { describedBy, FieldNotes } from "../../../components/form/Field.tsx";
 
 // The same control look as components/form/Field.tsx, sized for a gloved thumb: 48 px tall, 17 px text.
 export const controlClass =
@@ -20,7 +21,7 @@ interface MeasureProps extends Omit<InputHTMLAttributes<HTMLInputElement>, "onCh
 export function Measure({ label, unit, invalid, error, errorId, hint, labelAction, onValue, className = "", ...rest }: MeasureProps) {
   const auto = useId();
   const id = rest.id ?? auto;
-  const describedBy = [error ? `${id}-error` : errorId && invalid ? errorId : null, hint && !error ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
+  const shared = errorId && invalid && !error ? errorId : null;
   return (
     <div className="flex min-w-0 flex-col gap-1">
       <div className="flex min-h-6 items-end justify-between gap-2">
@@ -35,22 +36,14 @@ export function Measure({ label, unit, invalid, error, errorId, hint, labelActio
           id={id}
           autoComplete="off"
           aria-invalid={Boolean(error || invalid)}
-          aria-describedby={describedBy}
+          aria-describedby={[shared, describedBy(id, error, hint)].filter(Boolean).join(" ") || undefined}
           className={`${controlClass} ${className}`}
           onChange={(e) => onValue(e.target.value)}
         />
         {unit ? <span className="unit shrink-0 text-sm">{unit}</span> : null}
       </div>
-      {hint && !error ? (
-        <p id={`${id}-hint`} className="text-xs text-ink-soft">
-          {hint}
-        </p>
-      ) : null}
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-bold text-brick">
-          {error}
-        </p>
-      ) : null}
+      {/* The status line at the foot of the screen says how many need attention, so each error is not an alert. */}
+      <FieldNotes id={id} error={error} hint={hint} announce={false} />
     </div>
   );
 }

@@ -17,7 +17,7 @@ export function ColumnPicker({ value, onChange, errors }: { value: ColumnDraft[]
   const move = (i: number, by: number) => {
     const next = [...value];
     const [c] = next.splice(i, 1);
-    next.splice(i + by, 0, c!);
+    next.splice(i + by, 0, c);
     onChange(next);
   };
   const set = (i: number, patch: Partial<ColumnDraft>) => onChange(value.map((c, k) => (k === i ? { ...c, ...patch } : c)));

@@ -1,4 +1,5 @@
-import { useEffect, useState, type FormEvent } from "react";
+import type { FormEvent } from "react";
+import { useDraft } from "../../../components/form/use-draft.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { LEAD_STATUSES, LEAD_STATUS_LABELS, type LeadStatus } from "../../../../shared/constants/leads.ts";
 import type { LeadFilters } from "../api/leads.ts";
@@ -7,8 +8,7 @@ const select = "min-h-11 rounded-md border border-line-strong bg-paper-raised px
 
 /** Filters that live in the URL, so a filtered inbox can be bookmarked and shared. */
 export function LeadFiltersBar({ filters, onChange }: { filters: LeadFilters; onChange: (f: LeadFilters) => void }) {
-  const [q, setQ] = useState(filters.q ?? "");
-  useEffect(() => setQ(filters.q ?? ""), [filters.q]);
+  const [q, setQ] = useDraft(filters.q ?? "", filters.q);
   const search = (e: FormEvent) => {
     e.preventDefault();
     onChange({ ...filters, q: q.trim() || undefined });

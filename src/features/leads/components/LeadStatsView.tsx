@@ -3,8 +3,7 @@ import type { LeadStats } from "../api/leads.ts";
 import { Panel } from "../../../components/ui/Page.tsx";
 import { EmptyState } from "../../../components/feedback/Notice.tsx";
 import { SOURCE_LABELS } from "../format.ts";
-
-const th = "px-4 py-3";
+import { cell as th, TableHead } from "../../../components/ui/DataTable.tsx";
 
 /** Counts only: which vehicles draw questions and from where. No buyer's name or address appears here. */
 export function LeadStatsView({ stats }: { stats: LeadStats }) {
@@ -14,13 +13,7 @@ export function LeadStatsView({ stats }: { stats: LeadStats }) {
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
       <Panel title="Enquiries per vehicle">
         <table className="w-full text-left text-sm">
-          <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-soft">
-            <tr>
-              <th scope="col" className={th}>Vehicle</th>
-              <th scope="col" className={th}>Stock no.</th>
-              <th scope="col" className={`${th} text-right`}>Enquiries</th>
-            </tr>
-          </thead>
+          <TableHead columns={[{ label: "Vehicle" }, { label: "Stock no." }, { label: "Enquiries", end: true }]} sunk={false} />
           <tbody>
             {stats.perVehicle.map((v) => (
               <tr key={v.vehicleId} className="border-b border-line last:border-0">
@@ -36,12 +29,7 @@ export function LeadStatsView({ stats }: { stats: LeadStats }) {
       </Panel>
       <Panel title="Enquiries per source">
         <table className="w-full text-left text-sm">
-          <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-soft">
-            <tr>
-              <th scope="col" className={th}>Source</th>
-              <th scope="col" className={`${th} text-right`}>Enquiries</th>
-            </tr>
-          </thead>
+          <TableHead columns={[{ label: "Source" }, { label: "Enquiries", end: true }]} sunk={false} />
           <tbody>
             {stats.perSource.map((s) => (
               <tr key={s.source} className="border-b border-line last:border-0">

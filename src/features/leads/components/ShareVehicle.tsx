@@ -1,8 +1,7 @@
 import { useState } from "react";
 import { useShareVehicle } from "../api/leads.ts";
-import { isApiError } from "../../../lib/api-client.ts";
 import { TextAreaField, TextField } from "../../../components/form/Field.tsx";
-import { onSubmitOf, setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, topError, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { shareVehicleSchema } from "../../../../shared/schemas/enquiries.ts";
@@ -15,8 +14,7 @@ export function ShareVehicle({ vehicleId, published }: { vehicleId: number; publ
   const form = useZodForm(shareVehicleSchema, { defaultValues: blank });
   const { errors } = form.formState;
   const [done, setDone] = useState<string | null>(null);
-  const error = share.error;
-  const fields = isApiError(error) ? error.fields : {};
+  const problem = topError(share.error);
   // Typing again means the last "sent" is no longer news.
   const field = (key: keyof typeof blank) => form.register(key, { onChange: () => setDone(null) });
 
@@ -38,7 +36,7 @@ export function ShareVehicle({ vehicleId, published }: { vehicleId: number; publ
         </Notice>
       ) : null}
       {done ? <Notice tone="success" title={done} /> : null}
-      {error && !Object.keys(fields).length ? <Notice tone="danger" title="Not sent">{error.message} What you typed is still here.</Notice> : null}
+      {problem ? <Notice tone="danger" title="Not sent">{problem.message} What you typed is still here.</Notice> : null}
       <fieldset disabled={!published || share.isPending} className="flex flex-col gap-4 disabled:opacity-70">
         <TextField label="Buyer's e-mail" type="email" inputMode="email" autoComplete="off" {...field("email")} error={errors.email?.message} />
         <TextField label="Buyer's name (optional)" autoComplete="off" {...field("name")} error={errors.name?.message} />

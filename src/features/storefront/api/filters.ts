@@ -108,7 +108,7 @@ export function toApiQuery(f: StockFilters, market: Pick<PublicDealership, "curr
     pageSize: PAGE_SIZE,
   };
   // Undefined keys out, so equal views share one cache entry.
-  return Object.fromEntries(Object.entries(q).filter(([, v]) => v !== undefined)) as PublicListQuery;
+  return Object.fromEntries(Object.entries(q).filter(([, v]) => v !== undefined));
 }
 
 /** How many filters narrow the view (the search box and the sort are not counted). */

@@ -1,7 +1,7 @@
 // The public pages' reads: one key factory, one queryOptions per read. Public pages import nothing from the staff
 // features; the answers' shapes are the contract in shared/schemas/public.ts.
 import { keepPreviousData, queryOptions } from "@tanstack/react-query";
-import { ApiError } from "../../../lib/api-client.ts";
+import { ApiError, safeJson } from "../../../lib/api-client.ts";
 import type { PublicListQuery } from "../../../../shared/schemas/public-query.ts";
 import type { PublicVehicle, PublicVehicleCard } from "../../../../shared/schemas/public.ts";
 import type { PublicDealership } from "../../../../shared/schemas/dealership.ts";
@@ -40,12 +40,7 @@ async function getPublic<T>(path: string, signal?: AbortSignal): Promise<T> {
     throw new ApiError(0, "network", "We could not reach our website just now. Check your connection and try again.");
   }
   const text = await response.text();
-  let data: unknown = null;
-  try {
-    data = text ? JSON.parse(text) : null;
-  } catch {
-    data = null;
-  }
+  const data = text ? safeJson(text) : null;
   if (!response.ok) {
     const body = (data && typeof data === "object" ? data : {}) as Record<string, unknown>;
     const { error, ...rest } = body;

@@ -76,7 +76,13 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
             ) : null}
           </div>
           <div className="fr-pair grid grid-cols-1 gap-10 lg:grid-cols-2">
-            <Revisions slug={vehicle.slug} revisions={vehicle.revisions.length ? vehicle.revisions : [vehicle.revision]} viewing={vehicle.revision.number} latest={latest} dealership={s.dealership} />
+            <Revisions
+              slug={vehicle.slug}
+              revisions={vehicle.revisions.length ? vehicle.revisions : [vehicle.revision]}
+              viewing={vehicle.revision.number}
+              latest={latest}
+              dealership={s.dealership}
+            />
             <Dealership snapshot={s} />
           </div>
           <div className="fr-pair grid grid-cols-1 gap-10 lg:grid-cols-2">

@@ -18,7 +18,7 @@ export function Pagination({ page, pageCount, href, locale }: { page: number; pa
       <ul className="flex flex-wrap items-center gap-2">
         {pages.map((p, i) => (
           <li key={p} className="flex items-center gap-2">
-            {i > 0 && p - pages[i - 1]! > 1 ? <span aria-hidden className="text-ink-soft">…</span> : null}
+            {i > 0 && p - pages[i - 1] > 1 ? <span aria-hidden className="text-ink-soft">…</span> : null}
             {p === page ? (
               <span aria-current="page" className={`${box} border-ink bg-ink text-paper-raised figures`}>
                 <span className="sr-only">Page </span>

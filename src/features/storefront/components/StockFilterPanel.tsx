@@ -1,4 +1,5 @@
-import { useEffect, useId, useState, type FormEvent, type ReactNode } from "react";
+import { useId, useState, type FormEvent, type ReactNode } from "react";
+import { useDraft } from "../../../components/form/use-draft.ts";
 import { BODY_TYPES, FUEL_TYPES } from "../../../../shared/constants/vehicle.ts";
 import type { PublicDealership } from "../../../../shared/schemas/dealership.ts";
 import { activeFilterCount, type StockFilters } from "../api/filters.ts";
@@ -36,15 +37,11 @@ export function StockFilterPanel({
   onChange: (changes: Changes) => void;
 }) {
   const id = useId();
-  const [numbers, setNumbers] = useState(() => numbersOf(filters));
-  const [invalid, setInvalid] = useState<NumberKey[]>([]);
-  const [open, setOpen] = useState(false);
   // The URL is the truth: back and forward put the fields back as they were.
   const key = NUMBER_KEYS.map((k) => filters[k]).join("|");
-  useEffect(() => {
-    setNumbers(numbersOf(filters));
-    setInvalid([]);
-  }, [key]);
+  const [numbers, setNumbers] = useDraft(numbersOf(filters), key);
+  const [invalid, setInvalid] = useDraft<NumberKey[]>([], key);
+  const [open, setOpen] = useState(false);
 
   const apply = (e: FormEvent) => {
     e.preventDefault();
@@ -52,7 +49,7 @@ export function StockFilterPanel({
     const bad = parsed.filter(([, v]) => v === "invalid").map(([k]) => k);
     setInvalid(bad);
     if (bad.length) return;
-    onChange(Object.fromEntries(parsed) as Changes);
+    onChange(Object.fromEntries(parsed));
   };
 
   const n = activeFilterCount(filters);
@@ -140,7 +137,15 @@ export function StockFilterPanel({
   );
 }
 
-function Select({ label: text, value, onChange, any, children }: { label: string; value: string; onChange: (v: string | null) => void; any: string; children: ReactNode }) {
+interface SelectProps {
+  label: string;
+  value: string;
+  onChange: (v: string | null) => void;
+  any: string;
+  children: ReactNode;
+}
+
+function Select({ label: text, value, onChange, any, children }: SelectProps) {
   return (
     <label className={fieldLabel}>
       {text}

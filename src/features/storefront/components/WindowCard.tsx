@@ -38,7 +38,7 @@ export function WindowCard({ vehicle }: { vehicle: PublicVehicle }) {
     ["Fuel and gearbox", [label("fuelType", s.fuelType), label("transmission", s.transmission)].filter(Boolean).join(" · ") || "—"],
     ["Range per tank, theoretical", <Qty text={range} />],
   ];
-  if (s.fuelType === "electric") figures[3]![0] = "Range per charge, theoretical";
+  if (s.fuelType === "electric") figures[3][0] = "Range per charge, theoretical";
 
   return (
     <div className="fr-card-page min-h-dvh bg-paper-sunk print:bg-white">

@@ -1,8 +1,7 @@
 import { useState } from "react";
 import { useCreateUser } from "../api/users.ts";
-import { isApiError } from "../../../lib/api-client.ts";
 import { SelectField, TextField } from "../../../components/form/Field.tsx";
-import { onSubmitOf, setServerErrors, useZodForm } from "../../../components/form/use-zod-form.ts";
+import { onSubmitOf, setServerErrors, topError, useZodForm } from "../../../components/form/use-zod-form.ts";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
 import { ROLES, ROLE_LABELS, type Role } from "../../../../shared/constants/roles.ts";
@@ -15,7 +14,7 @@ export function AddUserForm() {
   const form = useZodForm(createUserSchema, { defaultValues: empty });
   const { errors } = form.formState;
   const [added, setAdded] = useState<string | null>(null);
-  const fields = isApiError(create.error) ? create.error.fields : {};
+  const problem = topError(create.error);
   const role = form.watch("role");
 
   const submit = form.handleSubmit(
@@ -41,9 +40,9 @@ export function AddUserForm() {
           </Notice>
         </div>
       ) : null}
-      {create.error && !Object.keys(fields).length ? (
+      {problem ? (
         <div className="sm:col-span-2">
-          <Notice tone="danger" title={create.error.message} />
+          <Notice tone="danger" title={problem.message} />
         </div>
       ) : null}
       <TextField label="Name" {...form.register("name")} error={errors.name?.message} autoComplete="off" />

@@ -2,11 +2,21 @@ import { SEVERITY_LABELS, type Severity } from "../../../../shared/constants/evi
 
 const WEIGHT: Record<Severity, string> = { minor: "border-2", moderate: "border-[3px]", major: "border-[5px]" };
 
+interface Props {
+  number: number;
+  severity: Severity;
+  x: number;
+  y: number;
+  label: string;
+  onClick?: () => void;
+  selected?: boolean;
+}
+
 /**
  * Our defect mark: a rounded square tag with the defect's number; the outline gets heavier with severity and the
  * severity is spelt out under it, so the mark never relies on colour.
  */
-export function DefectPin({ number, severity, x, y, label, onClick, selected }: { number: number; severity: Severity; x: number; y: number; label: string; onClick?: () => void; selected?: boolean }) {
+export function DefectPin({ number, severity, x, y, label, onClick, selected }: Props) {
   return (
     <button
       type="button"

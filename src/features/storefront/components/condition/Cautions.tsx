@@ -14,27 +14,28 @@ export function Cautions({ cautions }: { cautions: Caution[] }) {
       {blocks.length ? (
         <div role="note" className="fr-caution-block rounded-lg border-2 border-brick bg-brick-wash px-4 py-4 sm:px-5">
           <p className="text-lg font-bold text-brick">Safety: to be put right before the vehicle is used on the road</p>
-          <ul className="mt-2 flex flex-col gap-2">
-            {blocks.map((c) => (
-              <li key={c.code} data-caution={c.code}>
-                <strong>Safety:</strong> {c.text}
-              </li>
-            ))}
-          </ul>
+          <CautionList cautions={blocks} word="Safety" />
         </div>
       ) : null}
       {advises.length ? (
         <div className={`fr-caution-advise rounded-lg border border-l-4 border-ochre bg-ochre-wash px-4 py-4 sm:px-5 ${blocks.length ? "mt-4" : ""}`}>
           <p className="font-bold">Advisories: worth knowing, and worth asking about</p>
-          <ul className="mt-2 flex flex-col gap-2">
-            {advises.map((c) => (
-              <li key={c.code} data-caution={c.code}>
-                <strong>Advisory:</strong> {c.text}
-              </li>
-            ))}
-          </ul>
+          <CautionList cautions={advises} word="Advisory" />
         </div>
       ) : null}
     </Section>
+  );
+}
+
+/** Each caution says its level in words, so the list reads the same without the colour and on paper. */
+function CautionList({ cautions, word }: { cautions: Caution[]; word: string }) {
+  return (
+    <ul className="mt-2 flex flex-col gap-2">
+      {cautions.map((c) => (
+        <li key={c.code} data-caution={c.code}>
+          <strong>{word}:</strong> {c.text}
+        </li>
+      ))}
+    </ul>
   );
 }

@@ -32,9 +32,9 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
   }
 
   const total = photos.length;
-  const cover = photos[coverIndex]!;
-  const photo = photos[index]!;
-  const alt = (i: number) => photoAlt(photos[i]!, i, total, zoneLabel);
+  const cover = photos[coverIndex];
+  const photo = photos[index];
+  const alt = (i: number) => photoAlt(photos[i], i, total, zoneLabel);
   const go = (i: number, focusThumb = false) => {
     const next = (i + total) % total;
     setIndex(next);
@@ -42,7 +42,7 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
     t?.scrollIntoView({ block: "nearest", inline: "nearest" });
     if (focusThumb) t?.focus();
   };
-  const keys = (focusThumb: boolean) => (e: KeyboardEvent) => {
+  const keys = (e: KeyboardEvent, focusThumb: boolean) => {
     const to = { ArrowRight: index + 1, ArrowLeft: index - 1, Home: 0, End: total - 1 }[e.key];
     if (to === undefined) return;
     e.preventDefault();
@@ -69,7 +69,7 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
           aria-roledescription="photo viewer"
           aria-label={`Photo ${index + 1} of ${total}. Use the left and right arrow keys to move between photos.`}
           tabIndex={0}
-          onKeyDown={keys(false)}
+          onKeyDown={(e) => keys(e, false)}
           onPointerDown={down}
           onPointerUp={up}
           onPointerCancel={() => (swipe.current = null)}
@@ -106,7 +106,7 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
         </figcaption>
       </figure>
       {total > 1 ? (
-        <ul aria-label="All photos" className="fr-gallery-control mt-3 flex gap-2 overflow-x-auto pb-2 print:hidden" onKeyDown={keys(true)}>
+        <ul aria-label="All photos" className="fr-gallery-control mt-3 flex gap-2 overflow-x-auto pb-2 print:hidden" onKeyDown={(e) => keys(e, true)}>
           {photos.map((p, i) => (
             <li key={i} className="shrink-0">
               <button

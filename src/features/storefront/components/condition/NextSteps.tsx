@@ -23,7 +23,13 @@ export function Enquiry({ snapshot: s, status, revision, slug }: { snapshot: Pub
         </p>
         {status !== "sold" ? (
           <div className="mt-4">
-            <EnquiryForm slug={slug} revision={revision} vehicleTitle={s.title} stockNumber={s.stockNumber} dealership={{ name: d.name, phone: d.phone, email: d.email }} />
+            <EnquiryForm
+              slug={slug}
+              revision={revision}
+              vehicleTitle={s.title}
+              stockNumber={s.stockNumber}
+              dealership={{ name: d.name, phone: d.phone, email: d.email }}
+            />
           </div>
         ) : null}
         <div className="mt-4 flex flex-wrap gap-3">

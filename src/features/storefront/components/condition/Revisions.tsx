@@ -4,8 +4,16 @@ import type { PublicDealership } from "../../../../../shared/schemas/dealership.
 import { publishedText } from "../../format.ts";
 import { Section } from "./Section.tsx";
 
+interface Props {
+  slug: string;
+  revisions: RevisionSummary[];
+  viewing: number;
+  latest: number;
+  dealership: PublicDealership;
+}
+
 /** Every published revision, newest first, with what changed; each older one stays readable as it was. */
-export function Revisions({ slug, revisions, viewing, latest, dealership }: { slug: string; revisions: RevisionSummary[]; viewing: number; latest: number; dealership: PublicDealership }) {
+export function Revisions({ slug, revisions, viewing, latest, dealership }: Props) {
   const list = [...revisions].sort((a, b) => b.number - a.number);
   return (
     <Section

@@ -28,7 +28,8 @@ export function ServiceHistory({ snapshot: s, locale }: { snapshot: PublicSnapsh
             ))}
           </ul>
           <p className="mt-2">
-            A lower later reading can come from a replaced instrument, a mistake in the records, or tampering. Ask us what we know, and have the history checked before you buy.
+            A lower later reading can come from a replaced instrument, a mistake in the records, or tampering. Ask us what we know, and have
+            the history checked before you buy.
           </p>
         </div>
       ) : null}

@@ -156,7 +156,7 @@ function DefectMap({
       {entries.length === 0 ? <p className="mt-3 text-ink-soft">No item is pinned on a photo.</p> : null}
       <div className="fr-map-photos mt-4 flex flex-col gap-6">
         {entries.map(([photoIndex, pins]) => {
-          const photo = photos[photoIndex]!;
+          const photo = photos[photoIndex];
           const where = photo.caption.trim() || (photo.zone ? zoneLabel(photo.zone) : `Photo ${photoIndex + 1}`);
           const chosen = pins.find((d) => d.number === selected) ?? null;
           return (
@@ -194,7 +194,14 @@ function DefectMap({
 }
 
 /** The list by zone: reads completely without the photos. */
-function DefectList({ snapshot, selected, onShowPin, locale }: { snapshot: PublicSnapshot; selected: number | null; onShowPin: (n: number) => void; locale: string }) {
+interface DefectListProps {
+  snapshot: PublicSnapshot;
+  selected: number | null;
+  onShowPin: (n: number) => void;
+  locale: string;
+}
+
+function DefectList({ snapshot, selected, onShowPin, locale }: DefectListProps) {
   const groups = zoneOrder(snapshot)
     .map((zone) => ({ zone, items: snapshot.defects.filter((d) => d.zone === zone).sort((a, b) => a.number - b.number) }))
     .filter((g) => g.items.length > 0);
