@@ -6,6 +6,7 @@ import { readdirSync, renameSync, statSync, utimesSync } from "node:fs";
 import path from "node:path";
 import { ORIGIN, startTestApp, type TestApp } from "../support/app.ts";
 import { dieselSuv } from "../support/vehicles.ts";
+import { prepareReadyVehicle } from "../support/publishing.ts";
 import { landscapeJpeg, pngDeclaring, SVG_WITH_SCRIPT } from "../support/images.ts";
 import { removeOrphans } from "../../server/modules/photos/cleanup.ts";
 import { removeIfOlder, returnIfNeeded } from "../../server/lib/storage.ts";
@@ -248,4 +249,47 @@ describe("arranging photos", () => {
     renameSync(file, path.join(t.ctx.uploadsDir, aside));
     expect(await returnIfNeeded(t.ctx.uploadsDir, aside, new Set())).toBe(false);
   });
+});
+
+describe("media for portals (issue 16)", () => {
+  const mediaUrls = (json: unknown) => [...new Set([...JSON.stringify(json).matchAll(/\/media\/[^"\s,]+/g)].map((m) => m[0]))];
+  const corp = async (url: string) => {
+    const res = await request(t.app).get(url);
+    expect(res.status, url).toBe(200);
+    return { policy: res.headers["cross-origin-resource-policy"], cache: res.headers["cache-control"] };
+  };
+  const PUBLISHED = { policy: "cross-origin", cache: "public, max-age=31536000, immutable" };
+  const STAFF_ONLY = { policy: "same-origin", cache: "private, max-age=31536000, immutable" };
+
+  it("when media is in a published revision, then it may be embedded anywhere (CORP cross-origin), the QR image too; staff-only media stays same-origin", async () => {
+    const { vehicleId, sales, workshop } = await prepareReadyVehicle(t);
+    const staffUrls = mediaUrls((await workshop.get(`/api/vehicles/${vehicleId}/photos`)).body);
+    expect(staffUrls.length).toBeGreaterThan(3);
+    // Not published yet: staff-only, and no shared cache may keep it.
+    expect(await corp(staffUrls[0])).toEqual(STAFF_ONLY);
+
+    const published = await sales.post(`/api/vehicles/${vehicleId}/publish`).send({});
+    expect(published.status).toBe(201);
+    const snapshot = (await request(t.app).get(`/api/public/vehicles/${published.body.slug}`)).body.vehicle.snapshot;
+    const publicUrls = mediaUrls(snapshot);
+    expect(publicUrls.some((u) => u.startsWith("/media/closeups/"))).toBe(true);
+    for (const url of publicUrls) expect(await corp(url), url).toEqual(PUBLISHED);
+    // The key seen before the publish is published now (nothing remembered it as staff-only), and stays so when asked again.
+    expect(await corp(staffUrls[0])).toEqual(PUBLISHED);
+    expect(await corp(staffUrls[0])).toEqual(PUBLISHED);
+
+    const qr = await request(t.app).get(`/api/public/vehicles/${published.body.slug}/qr.svg`);
+    expect(qr.status).toBe(200);
+    expect(qr.headers["cross-origin-resource-policy"]).toBe("cross-origin");
+
+    // A photo of a vehicle never published stays restricted.
+    const other = await newVehicle();
+    const up = await workshop.post(`/api/vehicles/${other.id}/photos`).attach("photos", await landscapeJpeg(900, 600), "other.jpg");
+    expect(up.status).toBe(201);
+    await t.ctx.photoWorker.settled();
+    const otherUrls = mediaUrls((await workshop.get(`/api/vehicles/${other.id}/photos`)).body);
+    for (const url of otherUrls) expect(await corp(url), url).toEqual(STAFF_ONLY);
+    // Everything else keeps helmet's same-origin: the API and the pages.
+    expect((await request(t.app).get(`/api/public/vehicles/${published.body.slug}`)).headers["cross-origin-resource-policy"]).toBe("same-origin");
+  }, 120_000);
 });

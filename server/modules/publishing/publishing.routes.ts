@@ -56,7 +56,8 @@ export function publicVehiclesRoutes(ctx: AppContext): Router {
     ...route({ allow: "anyone", params: slugParams }, async ({ params, res }) => {
       await assertPublic(ctx, params.slug); // 404 never published, 410 withdrawn; the code needs no revision read
       const svg = await QRCode.toString(urlFor(ctx, params.slug), { type: "svg", errorCorrectionLevel: "M", margin: 2, color: { dark: "#18212c", light: "#ffffff" } });
-      res.type("image/svg+xml").setHeader("Cache-Control", "public, max-age=3600");
+      // A published page's code: portals and printed-sheet tools may embed it from anywhere (issue 16).
+      res.type("image/svg+xml").setHeader("Cache-Control", "public, max-age=3600").setHeader("Cross-Origin-Resource-Policy", "cross-origin");
       res.send(svg);
     }),
   );
