@@ -7,6 +7,8 @@ import { randomUUID } from "node:crypto";
 import type { AppContext } from "./lib/context.ts";
 import { loadSession } from "./middleware/authenticate.ts";
 import { originCheck } from "./middleware/origin-check.ts";
+import { noStoreWhenSignedIn } from "./middleware/no-store.ts";
+import { warnOfUntrustedProxy } from "./middleware/rate-limit.ts";
 import { dealershipDay } from "./middleware/route.ts";
 import { getDealership, todayFor } from "./modules/dealerships/dealerships.service.ts";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.ts";
@@ -33,6 +35,7 @@ export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
   app.set("trust proxy", ctx.config.TRUST_PROXY ? 1 : false);
+  app.use(warnOfUntrustedProxy(ctx.logger, ctx.config.TRUST_PROXY));
 
   app.use(
     pinoHttp({
@@ -83,6 +86,7 @@ export function createApp(ctx: AppContext): Express {
   const api = express.Router();
   api.use(express.json({ limit: "512kb" }));
   api.use(loadSession(ctx.auth));
+  api.use(noStoreWhenSignedIn);
   api.use(originCheck({ origins: ctx.config.allowedOrigins }));
   api.use(dealershipDay(async (user) => {
     const dealership = await getDealership(ctx.database.db, user.dealershipId);

@@ -16,7 +16,12 @@ export const newPasswordSchema = z
 export const versionSchema = z.number({ error: "The record's version is missing." }).int().min(1);
 
 // Path parameters: one schema per shape, shared by every route that has it (server/middleware/route.ts `params`).
-const positiveId = z.coerce.number().int().positive();
+// Digits only: coercion took "0x0b", " 11" and "1e3" for 11 and 1000. int() keeps it a safe integer.
+const positiveId = z
+  .string()
+  .regex(/^[0-9]{1,16}$/, "An id is written in digits only.")
+  .transform(Number)
+  .pipe(z.number().int().positive());
 
 /** `:id` of a record with a numeric id: a lead, a feed, a captured mail. */
 export const idParams = z.object({ id: positiveId });

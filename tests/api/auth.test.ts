@@ -122,3 +122,22 @@ describe("security headers", () => {
     expect(res.headers["x-powered-by"]).toBeUndefined();
   });
 });
+
+describe("private answers", () => {
+  it("when a signed-in request is answered under /api, then Cache-Control is no-store, errors included", async () => {
+    const sales = await t.signIn("sales");
+    const wrong: string[] = [];
+    for (const path of ["/api/vehicles", "/api/vehicles/1", "/api/leads", "/api/dealership", "/api/auth/session", "/api/vehicles/999999", "/api/nothing-here", "/api/public/vehicles"]) {
+      const res = await sales.get(path);
+      if (res.headers["cache-control"] !== "no-store") wrong.push(`${path}: ${res.status} ${String(res.headers["cache-control"])}`);
+    }
+    const saved = await sales.post("/api/vehicles").send({});
+    if (saved.headers["cache-control"] !== "no-store") wrong.push(`POST /api/vehicles: ${saved.status} ${String(saved.headers["cache-control"])}`);
+    expect(wrong).toEqual([]);
+  });
+
+  it("when nobody is signed in, then public answers keep their caching", async () => {
+    expect((await request(t.app).get("/api/public/vehicles")).headers["cache-control"]).toBe("public, max-age=30");
+    expect((await request(t.app).get("/api/public/dealership")).headers["cache-control"]).toBe("public, max-age=60");
+  });
+});
