@@ -46,7 +46,7 @@ export const routes: RouteObject[] = [
         children: [
           { index: true, ...page(() => import("./routes/staff-overview.tsx")) },
           { path: "vehicles", ...page(() => import("./routes/vehicles.tsx")) },
-          { path: "vehicles/new", ...page(() => import("./routes/vehicle-new.tsx")) },
+          { path: "vehicles/new", ...page(() => import("./routes/vehicle-new.tsx"), "vehicle.create") },
           {
             path: "vehicles/:id",
             ...page(() => import("./layouts/VehicleLayout.tsx")),

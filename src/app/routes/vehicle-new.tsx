@@ -1,11 +1,12 @@
 import { Link } from "react-router";
-import { RequireAction, useStaffUser } from "../RequireAction.tsx";
+import { useStaffUser } from "../RequireAction.tsx";
 import { useDealership } from "../../features/settings/api/dealership.ts";
 import { VehicleEditor } from "../../features/vehicles/editor/VehicleEditor.tsx";
 import { PageHeader } from "../../components/ui/Page.tsx";
 import { Loading, Notice } from "../../components/feedback/Notice.tsx";
 
-function NewVehicle() {
+/** The page of a new vehicle; the router guards it with "vehicle.create". */
+export default function NewVehicle() {
   const user = useStaffUser();
   const d = useDealership();
   return (
@@ -14,13 +15,5 @@ function NewVehicle() {
       <PageHeader title="Add a vehicle" lead="Start with the make and model; fill in the rest now or as the vehicle moves through the yard. Your typing is kept in this browser until it is saved." />
       {d.isPending ? <Loading /> : d.isError ? <Notice tone="danger" title={d.error.message} /> : <VehicleEditor dealership={d.data.dealership} role={user.role} />}
     </>
-  );
-}
-
-export default function VehicleNewRoute() {
-  return (
-    <RequireAction action="vehicle.create">
-      <NewVehicle />
-    </RequireAction>
   );
 }

@@ -17,7 +17,7 @@ export function PhotoGrid({ vehicleId, photos, editable }: { vehicleId: number; 
     if (to < 0 || to >= photos.length || from === to) return;
     const ids = photos.map((p) => p.id);
     const [id] = ids.splice(from, 1);
-    ids.splice(to, 0, id!);
+    ids.splice(to, 0, id);
     reorder.mutate(ids);
   };
 
@@ -30,8 +30,10 @@ export function PhotoGrid({ vehicleId, photos, editable }: { vehicleId: number; 
 
   const onKey = (e: KeyboardEvent, index: number) => {
     if (!e.altKey) return;
-    if (e.key === "ArrowLeft" || e.key === "ArrowUp") (e.preventDefault(), move(index, index - 1));
-    if (e.key === "ArrowRight" || e.key === "ArrowDown") (e.preventDefault(), move(index, index + 1));
+    const step = e.key === "ArrowLeft" || e.key === "ArrowUp" ? -1 : e.key === "ArrowRight" || e.key === "ArrowDown" ? 1 : 0;
+    if (!step) return;
+    e.preventDefault();
+    move(index, index + step);
   };
 
   return (
@@ -66,7 +68,10 @@ export function PhotoGrid({ vehicleId, photos, editable }: { vehicleId: number; 
                     value={captions[p.id] ?? p.caption}
                     maxLength={200}
                     onChange={(e) => setCaptions({ ...captions, [p.id]: e.target.value })}
-                    onBlur={() => captions[p.id] !== undefined && captions[p.id] !== p.caption && update.mutate({ id: p.id, version: p.version, caption: captions[p.id] })}
+                    onBlur={() => {
+                      const caption = captions[p.id];
+                      if (caption !== undefined && caption !== p.caption) update.mutate({ id: p.id, version: p.version, caption });
+                    }}
                   />
                 </label>
                 <label className="text-xs font-bold">

@@ -36,7 +36,7 @@ export function UploadQueue({ vehicleId, onUploaded, disabled }: { vehicleId: nu
       patchItem(item.id, { state: "uploading", progress: 0, message: "" });
       uploadPhoto(vehicleId, item.file, (f) => patchItem(item.id, { progress: f }))
         .then((r) => {
-          if (r.refused?.length) patchItem(item.id, { state: "refused", message: r.refused[0]!.reason });
+          if (r.refused?.length) patchItem(item.id, { state: "refused", message: r.refused[0].reason });
           else patchItem(item.id, { state: "done", progress: 1 });
           onUploaded();
         })

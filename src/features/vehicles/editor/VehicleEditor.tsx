@@ -21,6 +21,7 @@ import { DescriptionEditor } from "./DescriptionEditor.tsx";
 import { SelectField, TextField } from "../../../components/form/Field.tsx";
 import { Button } from "../../../components/ui/Button.tsx";
 import { Notice } from "../../../components/feedback/Notice.tsx";
+import { useUnsavedWarning } from "../../../components/form/use-unsaved-warning.ts";
 
 interface Props {
   vehicle?: VehicleView;
@@ -74,13 +75,7 @@ export function VehicleEditor({ vehicle, dealership, role }: Props) {
     return () => clearTimeout(t);
   }, [form, dirty, draftId, base?.version]);
 
-  useEffect(() => {
-    const warn = (e: BeforeUnloadEvent) => {
-      if (dirty) e.preventDefault();
-    };
-    window.addEventListener("beforeunload", warn);
-    return () => window.removeEventListener("beforeunload", warn);
-  }, [dirty]);
+  useUnsavedWarning(dirty);
 
   const derived = useMemo(() => {
     return computeDerived(
