@@ -300,7 +300,7 @@ describe("journeys, one per role", () => {
     const found = page.getByRole("region", { name: "What we found" });
     const pins = found.locator("button[aria-pressed]");
     await expect.poll(() => pins.count()).toBe(2);
-    const dent = found.getByRole("button", { name: /^Item 1: moderate dent/ });
+    const dent = found.getByRole("button", { name: /^1 moderate dent/ });
     await dent.scrollIntoViewIfNeeded();
     await dent.tap();
     await expect.poll(() => dent.getAttribute("aria-pressed")).toBe("true");

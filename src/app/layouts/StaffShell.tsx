@@ -70,7 +70,7 @@ export default function StaffShell() {
           <span className="text-ink-soft lg:hidden">
             {user.name} · {ROLE_LABELS[user.role].label}
           </span>
-          <a href="/" className="font-bold">
+          <a href="/" className="font-bold no-underline hover:underline">
             Public site
           </a>
           <button

@@ -58,7 +58,8 @@ export function TextField({ label, error, hint, after, className = "", ...rest }
   const id = rest.id ?? auto;
   return (
     <Frame id={id} label={label} error={error} hint={hint} after={after}>
-      <input {...rest} id={id} aria-invalid={Boolean(error)} aria-describedby={describedBy(id, error, hint)} className={`${control} ${className}`} />
+      {/* An explicit type, text unless told: the markup says what the field is without the reader's default. */}
+      <input type="text" {...rest} id={id} aria-invalid={Boolean(error)} aria-describedby={describedBy(id, error, hint)} className={`${control} ${className}`} />
     </Frame>
   );
 }

@@ -25,10 +25,13 @@ export function TableHead({ columns, sunk = true }: { columns: readonly Column[]
   );
 }
 
-/** A staff list as a table: framed, scrolling sideways on a narrow screen, its caption read to assistive technology. */
+/**
+ * A staff list as a table: framed, scrolling sideways on a narrow screen, its caption read to assistive technology.
+ * The frame takes focus, so a keyboard can scroll a table that has nothing focusable in it (WCAG 2.1.1).
+ */
 export function DataTable({ caption, columns, children }: { caption: string; columns: readonly Column[]; children: ReactNode }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-paper-raised">
+    <div role="region" aria-label={caption} tabIndex={0} className="overflow-x-auto rounded-lg border border-line bg-paper-raised">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <TableHead columns={columns} />

@@ -35,7 +35,7 @@ export function ConditionPage({ vehicle, latest }: { vehicle: PublicVehicle; lat
     <div className="fr-report flex min-h-dvh flex-col">
       <PrintPage url={vehicle.url} revision={vehicle.revision.number} published={published} />
       <SiteHeader dealership={s.dealership}>
-        <Link to="/" className="inline-flex min-h-11 items-center">
+        <Link to="/" className="inline-flex min-h-11 items-center no-underline hover:underline">
           All vehicles
         </Link>
       </SiteHeader>

@@ -17,7 +17,7 @@ export function SiteHeader({ dealership, children }: { dealership: PublicDealers
         <div className="flex flex-wrap items-center gap-x-5 gap-y-1">
           {children}
           {dealership?.phone ? (
-            <a href={telHref(dealership.phone)} className="inline-flex min-h-11 items-center font-bold">
+            <a href={telHref(dealership.phone)} className="inline-flex min-h-11 items-center font-bold no-underline hover:underline">
               <span className="sr-only">Call us on </span>
               {dealership.phone}
             </a>
@@ -57,7 +57,7 @@ export function SiteFooter({ dealership }: { dealership: PublicDealership | null
         )}
         <p className="sm:text-right">
           {/* A full page load: the staff area is its own application. */}
-          <a href="/sign-in" className="inline-flex min-h-11 items-center">
+          <a href="/sign-in" className="inline-flex min-h-11 items-center no-underline hover:underline">
             Staff sign-in
           </a>
         </p>

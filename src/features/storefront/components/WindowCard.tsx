@@ -43,7 +43,7 @@ export function WindowCard({ vehicle }: { vehicle: PublicVehicle }) {
   return (
     <div className="fr-card-page min-h-dvh bg-paper-sunk print:bg-white">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-3 px-4 py-4 print:hidden">
-        <Link to={`/vehicles/${encodeURIComponent(vehicle.slug)}`} className="inline-flex min-h-11 items-center font-bold">
+        <Link to={`/vehicles/${encodeURIComponent(vehicle.slug)}`} className="inline-flex min-h-11 items-center font-bold no-underline hover:underline">
           ← The full condition report
         </Link>
         <div className="flex flex-wrap items-center gap-3">

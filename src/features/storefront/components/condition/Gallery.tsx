@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
+import { useEffect, useId, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import type { PublicPhoto } from "../../../../../shared/schemas/public.ts";
 import { formatNumber } from "../../../../../shared/domain/display.ts";
 import { zoneLabel } from "../../format.ts";
@@ -14,6 +14,7 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
   const coverIndex = Math.max(0, photos.findIndex((p) => p.isCover));
   const [index, setIndex] = useState(coverIndex);
   const thumbs = useRef<Array<HTMLButtonElement | null>>([]);
+  const thumbsLabel = useId();
   const swipe = useRef<{ x: number; y: number } | null>(null);
 
   // A printed report shows the cover, whichever photo was last looked at.
@@ -105,8 +106,12 @@ export function Gallery({ photos, title, locale }: { photos: PublicPhoto[]; titl
           ) : null}
         </figcaption>
       </figure>
+      {/* The thumbnails' list is named by text it points to: aria-label on an element without a role is flagged by validators. */}
+      <span id={thumbsLabel} hidden>
+        All photos
+      </span>
       {total > 1 ? (
-        <ul aria-label="All photos" className="fr-gallery-control mt-3 flex gap-2 overflow-x-auto pb-2 print:hidden" onKeyDown={(e) => keys(e, true)}>
+        <ul aria-labelledby={thumbsLabel} className="fr-gallery-control mt-3 flex gap-2 overflow-x-auto pb-2 print:hidden" onKeyDown={(e) => keys(e, true)}>
           {photos.map((p, i) => (
             <li key={i} className="shrink-0">
               <button

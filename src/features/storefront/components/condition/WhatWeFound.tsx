@@ -171,20 +171,21 @@ function DefectMap({
                   <DefectPinButton key={d.number} defect={d} selected={d.number === selected} onSelect={() => onSelect(d.number)} />
                 ))}
               </div>
+              {/* A figcaption must be the figure's first or last child, so the picked item's note lives inside it. */}
               <figcaption className="mt-2 text-sm">
                 <strong>{where}</strong>: {plural(pins.length, "item", "items")} {pins.map((d) => d.number).join(", ")}
+                <div aria-live="polite" className="print:hidden">
+                  {chosen ? (
+                    <p className="mt-2 rounded-md border-l-4 border-signal bg-signal-wash px-3 py-2 text-base">
+                      <strong>
+                        {chosen.number}. {headline(chosen, locale)}.
+                      </strong>{" "}
+                      {chosen.note ? `${chosen.note}. ` : ""}
+                      {repairPlanLabel(chosen.repairPlan)}. <a href={`#defect-${chosen.number}`}>See it in the list</a>
+                    </p>
+                  ) : null}
+                </div>
               </figcaption>
-              <div aria-live="polite" className="print:hidden">
-                {chosen ? (
-                  <p className="mt-2 rounded-md border-l-4 border-signal bg-signal-wash px-3 py-2">
-                    <strong>
-                      {chosen.number}. {headline(chosen, locale)}.
-                    </strong>{" "}
-                    {chosen.note ? `${chosen.note}. ` : ""}
-                    {repairPlanLabel(chosen.repairPlan)}. <a href={`#defect-${chosen.number}`}>See it in the list</a>
-                  </p>
-                ) : null}
-              </div>
             </figure>
           );
         })}
@@ -214,7 +215,11 @@ function DefectList({ snapshot, selected, onShowPin, locale }: DefectListProps) 
             <h4 className="text-lg font-bold">
               {zoneLabel(g.zone)} <span className="font-normal text-ink-soft">· {count(g.items.length, "item", "items", locale)}</span>
             </h4>
-            <ol aria-label={`Items in ${zoneLabel(g.zone)}`} className="mt-2 flex flex-col gap-2">
+            {/* Named through hidden text rather than aria-label, which validators flag on a list without a role. */}
+            <span id={`items-${g.zone}`} hidden>
+              Items in {zoneLabel(g.zone)}
+            </span>
+            <ol aria-labelledby={`items-${g.zone}`} className="mt-2 flex flex-col gap-2">
               {g.items.map((d) => (
                 <DefectRow key={d.number} defect={d} selected={selected === d.number} onShowPin={d.pin ? () => onShowPin(d.number) : null} locale={locale} />
               ))}
@@ -235,11 +240,13 @@ function DefectRow({ defect: d, selected, onShowPin, locale }: { defect: PublicD
       data-selected={selected || undefined}
     >
       {onShowPin ? (
-        <button type="button" onClick={onShowPin} className="self-start rounded-md" aria-label={`Item ${d.number}: show its pin on the photo`}>
+        <button type="button" onClick={onShowPin} className="self-start rounded-md" aria-label={`${d.number}: show this item's pin on the photo`}>
           <DefectNumber defect={d} />
         </button>
       ) : (
-        <span className="self-start" aria-label={`Item ${d.number}`}>
+        <span className="self-start">
+          {/* A plain span may not carry a name (aria-label); the word is read before the number instead. */}
+          <span className="sr-only">Item </span>
           <DefectNumber defect={d} />
         </span>
       )}
