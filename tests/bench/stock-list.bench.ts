@@ -179,7 +179,7 @@ function generateVehicle(rng: Rng, i: number, ctx: { d: Dealership; today: strin
     createdAt: stockedAt,
     updatedAt,
   };
-  row.derived = deriveFor(row as Parameters<typeof deriveFor>[0], d, today);
+  row.derived = deriveFor(row, d, today);
   return row;
 }
 

@@ -1,5 +1,5 @@
 import { queryOptions, useIsFetching, useMutation, useQuery, useQueryClient, type QueryClient } from "@tanstack/react-query";
-import { ApiError, del, get, patch, put } from "../../../lib/api-client.ts";
+import { ApiError, del, get, isApiError, patch, put } from "../../../lib/api-client.ts";
 import { vehicleKeys } from "../../vehicles/api/vehicles.ts";
 import type { PhotoView, UploadResult } from "../../../../server/modules/photos/photos.presenter.ts";
 
@@ -21,10 +21,24 @@ function rereadReadinessWhenFinished(client: QueryClient, vehicleId: number, nex
   if ([...before].some((id) => !still.has(id))) void client.invalidateQueries({ queryKey: vehicleKeys.detail(vehicleId) });
 }
 
+/**
+ * A list read while a photo was being edited can arrive after the edit's answer: a photo the cache already holds at
+ * a newer version is kept, so a slow poll never puts back the zone or caption just saved (nor its old version, which
+ * would make the next edit a conflict).
+ */
+function keepNewer(client: QueryClient, vehicleId: number, next: PhotoView[]): PhotoView[] {
+  const held = new Map((client.getQueryData<PhotoList>(vehicleKeys.photos(vehicleId))?.photos ?? []).map((p) => [p.id, p]));
+  return next.map((p) => {
+    const mine = held.get(p.id);
+    return mine && mine.version > p.version ? mine : p;
+  });
+}
+
 /** Photos read elsewhere (the evidence answer carries them) enter the one photo cache here. */
 export function putPhotos(client: QueryClient, vehicleId: number, photos: PhotoView[]) {
-  rereadReadinessWhenFinished(client, vehicleId, photos);
-  client.setQueryData<PhotoList>(vehicleKeys.photos(vehicleId), { photos });
+  const merged = keepNewer(client, vehicleId, photos);
+  rereadReadinessWhenFinished(client, vehicleId, merged);
+  client.setQueryData<PhotoList>(vehicleKeys.photos(vehicleId), { photos: merged });
 }
 
 export const photosQueryOptions = (vehicleId: number) =>
@@ -32,8 +46,9 @@ export const photosQueryOptions = (vehicleId: number) =>
     queryKey: vehicleKeys.photos(vehicleId),
     queryFn: async ({ client }) => {
       const data = await get<PhotoList>(`/api/vehicles/${vehicleId}/photos`);
-      rereadReadinessWhenFinished(client, vehicleId, data.photos);
-      return data;
+      const photos = keepNewer(client, vehicleId, data.photos);
+      rereadReadinessWhenFinished(client, vehicleId, photos);
+      return { photos };
     },
     // Re-read while any photo is still being processed, so it turns ready by itself (and readiness with it).
     refetchInterval: (q) => (q.state.data?.photos.some((p) => p.status === "processing") ? 1500 : false),
@@ -85,8 +100,23 @@ export function useRefreshPhotos(vehicleId: number) {
 export function useUpdatePhoto(vehicleId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, ...input }: { id: number; version: number; caption?: string; zone?: string | null; isCover?: true }) =>
-      patch<{ photo: PhotoView }>(`/api/vehicles/${vehicleId}/photos/${id}`, input),
+    mutationFn: async ({ id, ...input }: { id: number; version: number; caption?: string; zone?: string | null; isCover?: true }) => {
+      const path = `/api/vehicles/${vehicleId}/photos/${id}`;
+      try {
+        return await patch<{ photo: PhotoView }>(path, input);
+      } catch (e) {
+        // The photo worker moves a photo's version when its sizes are made. If that is all that changed since this
+        // screen read it (caption, zone and cover as the person saw them), the edit is theirs to make: send it again
+        // on the current version. Anyone else's edit still comes back as the conflict.
+        const current = isApiError(e) && e.code === "stale_version" ? (e.details.current as PhotoView | undefined) : undefined;
+        const seen = qc.getQueryData<PhotoList>(vehicleKeys.photos(vehicleId))?.photos.find((p) => p.id === id);
+        const onlyProcessed = current && seen && current.caption === seen.caption && current.zone === seen.zone && current.isCover === seen.isCover;
+        if (!onlyProcessed) throw e;
+        return patch<{ photo: PhotoView }>(path, { ...input, version: current.version });
+      }
+    },
+    // A poll already on its way would answer with the photo as it was; stop it (the next one reads the change).
+    onMutate: () => qc.cancelQueries({ queryKey: vehicleKeys.photos(vehicleId) }),
     onSuccess: ({ photo }, input) => {
       const prev = qc.getQueryData<PhotoList>(vehicleKeys.photos(vehicleId));
       // A new cover takes the mark off the old one, as the server does (without a new version for it).
