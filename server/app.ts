@@ -29,6 +29,7 @@ import { feedsPublicRoutes } from "./modules/feeds/feeds.public.routes.ts";
 import { pagesRoutes } from "./modules/publishing/pages.routes.ts";
 import { mediaRoutes } from "./modules/photos/media.routes.ts";
 import { clientRoutes } from "./modules/client/client.routes.ts";
+import { financeRoutes } from "./modules/finance/finance.routes.ts";
 
 /** Builds the whole HTTP application without listening, so tests drive it directly. */
 export function createApp(ctx: AppContext): Express {
@@ -103,6 +104,7 @@ export function createApp(ctx: AppContext): Express {
   api.use("/vehicles/:id", vehicleDetailRoutes(ctx));
   api.use("/public/dealership", publicDealershipRoutes(ctx));
   api.use("/public/vehicles", publicVehiclesRoutes(ctx), enquiryRoutes(ctx));
+  api.use("/public/finance-estimate", financeRoutes());
   api.use("/leads", leadsRoutes(ctx));
   api.use("/mail", mailRoutes(ctx));
   api.use("/feeds", feedsRoutes(ctx));

@@ -71,6 +71,7 @@ export const ROUTE_POLICY: Record<string, Allow> = {
   "GET /api/public/vehicles/:slug/revisions/:number": "anyone",
   "GET /api/public/vehicles/:slug/qr.svg": "anyone",
   "POST /api/public/vehicles/:slug/enquiries": "anyone",
+  "GET /api/public/finance-estimate": "anyone",
 
   "GET /api/leads/stats": "leads.stats",
   "GET /api/leads": "leads.read",
