@@ -3,6 +3,7 @@
 import { isSafetyCheckItem } from "./condition-rules.ts";
 import type { TyreAssessment } from "./tyre-assessment.ts";
 import { formatTreadDepth } from "./display.ts";
+import { DEFECT_KIND_LABELS, SEVERITY_LABELS, ZONE_LABELS } from "../constants/evidence.ts";
 
 export interface Caution {
   level: "block" | "advise";
@@ -26,6 +27,13 @@ export function safetyCautions(
         code: `check_failed_${c.item}`,
         text: `${c.label ?? c.item} failed. The vehicle must be repaired before it is sold for road use. A licensed inspector decides when it is fit for the road.`,
       });
+    } else if (c.result === "advise" && isSafetyCheckItem(c.item)) {
+      // Advice, not a verdict: the inspection noticed something on a safety item and says who decides.
+      out.push({
+        level: "advise",
+        code: `check_advised_${c.item}`,
+        text: `${c.label ?? c.item}: advised. Our inspection noted something that may need attention soon. Have it checked by a licensed inspector or mechanic; this report is not a safety certificate.`,
+      });
     }
   }
   for (const t of tyres) {
@@ -43,4 +51,58 @@ export function safetyCautions(
     }
   }
   return out;
+}
+
+/** A defect as the caution rules read it: the staff row and the published snapshot both fit. */
+export interface CautionDefect {
+  number: number;
+  zone: string;
+  kind: string;
+  severity: string;
+  repairPlan: string;
+  safetyRelevant?: boolean | null;
+}
+
+const DEFECT_CAUTION_PREFIX = "defect_safety_";
+
+/** Own properties only, so a code named like an object built-in never reads as a label. */
+const labelOf = (labels: Record<string, string>, code: string) => (Object.hasOwn(labels, code) ? labels[code] : code.replaceAll("_", " "));
+
+/** Marked as affecting safety and not repaired before sale: what blocks publishing and raises a caution. */
+export function unrepairedSafetyDefects<D extends CautionDefect>(defects: readonly D[]): D[] {
+  return defects.filter((d) => d.safetyRelevant === true && d.repairPlan !== "repaired_before_sale");
+}
+
+/**
+ * One caution per defect that affects safety and was not repaired before sale, worded for buyers: a condition report
+ * cannot say a car is safe, so it sends them to a licensed inspector.
+ */
+export function defectCautions(defects: readonly CautionDefect[]): Caution[] {
+  return unrepairedSafetyDefects(defects).map((d) => {
+    const what = `${labelOf(SEVERITY_LABELS, d.severity).toLowerCase()} ${labelOf(DEFECT_KIND_LABELS, d.kind).toLowerCase()}, ${labelOf(ZONE_LABELS, d.zone).toLowerCase()}`;
+    const state = d.repairPlan === "to_be_repaired" ? "is still to be repaired" : "has not been repaired";
+    return {
+      level: "block" as const,
+      code: `${DEFECT_CAUTION_PREFIX}${d.number}`,
+      text: `Item ${d.number} (${what}) affects safety and ${state}. Have it inspected by a licensed inspector before driving; this condition report is not a safety certificate.`,
+    };
+  });
+}
+
+/** The cautions a defect raised (the checks screen computes only the tyre and check ones as the form is typed). */
+export const isDefectCaution = (c: Pick<Caution, "code">) => c.code.startsWith(DEFECT_CAUTION_PREFIX);
+
+/**
+ * The cautions as one line of text for feeds and portals that show no list: the counts in words, then each caution's
+ * sentence, safety first. "No cautions." when there are none.
+ */
+export function cautionsInWords(cautions: readonly Caution[]): string {
+  if (cautions.length === 0) return "No cautions.";
+  const blocks = cautions.filter((c) => c.level === "block");
+  const advises = cautions.filter((c) => c.level !== "block");
+  const counts = [
+    blocks.length ? `${blocks.length} safety caution${blocks.length === 1 ? "" : "s"}` : "",
+    advises.length ? `${advises.length} advisor${advises.length === 1 ? "y" : "ies"}` : "",
+  ].filter(Boolean);
+  return [`${counts.join(" and ")}.`, ...blocks.map((c) => `Safety: ${c.text}`), ...advises.map((c) => `Advisory: ${c.text}`)].join(" ");
 }

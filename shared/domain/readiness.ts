@@ -10,6 +10,8 @@ export interface ReadinessInput {
   zones: Array<{ zone: string; state: "unchecked" | "nothing_found" | "defects" }>;
   roadTyresMeasured: number;
   blockingCautions: Array<{ code: string; text: string }>;
+  /** Numbers of the defects that affect safety and are not repaired before sale. */
+  unrepairedSafetyDefects: number[];
 }
 
 export type ReadinessSection = "record" | "photos" | "walkaround" | "checks";
@@ -81,7 +83,21 @@ export function readiness(input: ReadinessInput): Readiness {
       detail: input.blockingCautions.length ? input.blockingCautions.map((c) => c.text).join(" ") : "No safety item failed.",
       section: "checks",
     },
+    {
+      code: "safety_defects",
+      ok: input.unrepairedSafetyDefects.length === 0,
+      label: "No unrepaired defect that affects safety",
+      detail: safetyDefectsDetail(input.unrepairedSafetyDefects),
+      section: "walkaround",
+    },
   ];
   const missing = items.filter((i) => !i.ok);
   return { ready: missing.length === 0, items, missing };
+}
+
+function safetyDefectsDetail(numbers: number[]): string {
+  if (numbers.length === 0) return "No defect that affects safety is waiting for repair.";
+  const one = numbers.length === 1;
+  const list = one ? `Item ${numbers[0]}` : `Items ${numbers.slice(0, -1).join(", ")} and ${numbers.at(-1)}`;
+  return `${list} ${one ? "affects" : "affect"} safety and ${one ? "is" : "are"} not repaired. Repair ${one ? "it" : "them"} and set the plan to "Repaired before sale", or an admin may publish over this with a written reason.`;
 }

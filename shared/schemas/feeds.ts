@@ -91,6 +91,8 @@ export const FEED_COLUMNS = [
   { key: "defectsModerate", label: "Moderate defects", group: "condition" },
   { key: "defectsMajor", label: "Major defects", group: "condition" },
   { key: "cautionCount", label: "Cautions", group: "condition" },
+  { key: "safetyCautionCount", label: "Safety cautions", group: "condition" },
+  { key: "cautionsText", label: "Cautions in words", group: "condition" },
   { key: "photoCount", label: "Photos", group: "condition" },
   { key: "url", label: "Public page URL", group: "links" },
   { key: "coverPhotoUrl", label: "Cover photo URL", group: "links", width: true },

@@ -353,3 +353,27 @@ describe("the fetch log", () => {
     expect(listed.fetches).toHaveLength(1);
   });
 });
+
+describe("cautions in the feed", () => {
+  it("when a revision carries cautions, then the feed gives the safety count and the cautions in words beside the count", async () => {
+    const { vehicleId, sales, workshop } = await (await import("../support/publishing.ts")).prepareReadyVehicle(t);
+    const checks = (await workshop.get(`/api/vehicles/${vehicleId}/checks`)).body;
+    const put = await workshop.put(`/api/vehicles/${vehicleId}/checks`).send({
+      version: checks.checks.version,
+      results: [{ item: "brakes", result: "advise", note: "Front pads near their wear line" }, { item: "lights", result: "pass" }, { item: "warning_lamps", result: "pass" }],
+    });
+    expect(put.status, JSON.stringify(put.body)).toBe(200);
+    const pub = await sales.post(`/api/vehicles/${vehicleId}/publish`).send({});
+    expect(pub.status, JSON.stringify(pub.body)).toBe(201);
+    const stockNumber = (await snapshotOf(pub.body.slug)).stockNumber;
+    const { path } = await createFeed({ name: "Cautions JSON", format: "json" });
+    const body = (await request(app).get(path)).body;
+    const v = body.vehicles.find((x: { stockNumber: string }) => x.stockNumber === stockNumber);
+    expect(v.cautionCount).toBe(1);
+    expect(v.safetyCautionCount).toBe(0);
+    expect(v.cautionsText).toMatch(/^1 advisory\. Advisory: Brakes: advised\./);
+    const quiet = body.vehicles.filter((x: { cautionCount: number }) => x.cautionCount === 0);
+    expect(quiet.length).toBeGreaterThan(0);
+    for (const q of quiet) expect(q).toMatchObject({ safetyCautionCount: 0, cautionsText: "No cautions." });
+  });
+});

@@ -93,6 +93,33 @@ describe("the public side reads only revisions", () => {
     expect(old.body.vehicle.snapshot.priceCents).toBe(3_499_000);
   });
 
+  it("when a defect affecting safety is not repaired, then it is a caution on the record, publishing is 409 until an admin overrides with a reason, and the older revision reads as it did", async () => {
+    const { vehicleId, slug, sales } = await publishReadyVehicle(t);
+    const first = (await request(t.app).get(`/api/public/vehicles/${slug}`)).body.vehicle.snapshot;
+    const w = await t.signIn("workshop");
+    const fault = (await w.post(`/api/vehicles/${vehicleId}/defects`).send({
+      zone: "underbody", kind: "corrosion", severity: "major", note: "Sill, rear left", repairPlan: "disclosed_as_is", safetyRelevant: true,
+    })).body.defect;
+    const code = `defect_safety_${fault.number}`;
+    const evidence = (await sales.get(`/api/vehicles/${vehicleId}/evidence`)).body.evidence;
+    expect(evidence.cautions.find((c: { code: string }) => c.code === code)).toMatchObject({ level: "block" });
+    const refused = await sales.post(`/api/vehicles/${vehicleId}/publish`).send({});
+    expect(refused.status).toBe(409);
+    const item = refused.body.error.readiness.missing.find((m: { code: string }) => m.code === "safety_defects");
+    expect(item.detail).toMatch(new RegExp(`^Item ${fault.number} affects safety and is not repaired`));
+    expect((await sales.post(`/api/vehicles/${vehicleId}/publish`).send({ overrideReason: "Sold to the trade as is" })).status).toBe(403);
+    const admin = await t.signIn("admin");
+    const res = await admin.post(`/api/vehicles/${vehicleId}/publish`).send({ overrideReason: "Trade sale: sold as is, the buyer has the inspection report" });
+    expect(res.status).toBe(201);
+    expect(res.body.revision).toMatchObject({ number: 2, overrideReason: expect.stringMatching(/^Trade sale/) });
+    const now = (await request(t.app).get(`/api/public/vehicles/${slug}`)).body.vehicle.snapshot;
+    const caution = now.cautions.find((c: { code: string }) => c.code === code);
+    expect(caution.text).toMatch(/licensed inspector before driving/);
+    const old = (await request(t.app).get(`/api/public/vehicles/${slug}/revisions/1`)).body.vehicle.snapshot;
+    expect(old.cautions).toEqual(first.cautions);
+    expect(old.cautions.some((c: { code: string }) => c.code === code)).toBe(false);
+  });
+
   it("when any public response is read, then nothing internal is in it: no repair costs, no plate, no staff ids, no audit", async () => {
     const { slug } = await publishReadyVehicle(t);
     const bodies = [

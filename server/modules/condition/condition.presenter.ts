@@ -3,6 +3,7 @@ import { conditionIndex, conditionIndexExplanation, summariseDefects } from "../
 import type { PhotoView } from "../photos/photos.presenter.ts";
 import { presentDefect, zoneStates } from "../walkaround/walkaround.presenter.ts";
 import type { ChecksView } from "../checks/checks.presenter.ts";
+import { defectCautions } from "../../../shared/domain/cautions.ts";
 
 /**
  * Everything recorded about a vehicle's condition, with the figures computed from it: photos, defects and zones,
@@ -23,6 +24,8 @@ export function presentEvidence(photos: PhotoView[], defectRows: Defect[], marks
     defects: defectRows.map(presentDefect),
     zones: zoneStates(defectRows, marks),
     ...checkSet,
+    // The one caution list: staff record, readiness and the snapshot (public page, print, window card) all read it.
+    cautions: [...checkSet.cautions, ...defectCautions(defectRows)],
     condition: {
       index: index?.index ?? null,
       deductions: index?.deductions ?? [],

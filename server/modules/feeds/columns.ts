@@ -5,6 +5,7 @@ import type { FeedColumn, FeedColumnKey, FeedUnits } from "../../../shared/schem
 import { DEFAULT_PHOTO_WIDTH, FEED_COLUMNS } from "../../../shared/schemas/feeds.ts";
 import { kmToMiles, l100kmToMpgImperial, l100kmToMpgUs } from "../../../shared/domain/units.ts";
 import { DAY_MS } from "../../lib/clock.ts";
+import { cautionsInWords } from "../../../shared/domain/cautions.ts";
 
 export type Cell = string | number | null | string[];
 
@@ -151,6 +152,8 @@ const GETTERS: Record<FeedColumnKey, Getter> = {
   defectsModerate: (r) => r.snapshot.condition.bySeverity.moderate ?? 0,
   defectsMajor: (r) => r.snapshot.condition.bySeverity.major ?? 0,
   cautionCount: (r) => r.snapshot.cautions.length,
+  safetyCautionCount: (r) => r.snapshot.cautions.filter((c) => c.level === "block").length,
+  cautionsText: (r) => cautionsInWords(r.snapshot.cautions),
   photoCount: (r) => r.snapshot.photos.length,
   url: (r, c) => pageUrl(c.publicUrl, r.slug),
   coverPhotoUrl: (r, c, col) => {

@@ -10,6 +10,7 @@ import type { Evidence } from "../condition/condition.presenter.ts";
 import { deriveFor, lockVehicle, recordView, requireVehicle } from "../vehicles/vehicles.service.ts";
 import type { DealershipDay } from "../../lib/clock.ts";
 import { readiness, type Readiness } from "../../../shared/domain/readiness.ts";
+import { isDefectCaution, unrepairedSafetyDefects } from "../../../shared/domain/cautions.ts";
 import { validateVinStructure, vinCheck } from "../../../shared/domain/vin.ts";
 import { ROAD_POSITIONS } from "../../../shared/domain/tyre-assessment.ts";
 import { describeChanges } from "../../../shared/domain/revision-changes.ts";
@@ -30,7 +31,9 @@ export function readinessOf(v: Vehicle, d: Dealership, evidence: Evidence): Read
     minPhotos: d.minPhotos,
     zones: evidence.zones,
     roadTyresMeasured: ROAD_POSITIONS.filter((p) => evidence.tyres.readings.some((r) => r.reading.position === p && r.assessment.tread)).length,
-    blockingCautions: evidence.cautions.filter((c) => c.level === "block"),
+    // Defects that affect safety have a readiness item of their own, so they are not listed twice.
+    blockingCautions: evidence.cautions.filter((c) => c.level === "block" && !isDefectCaution(c)),
+    unrepairedSafetyDefects: unrepairedSafetyDefects(evidence.defects).map((x) => x.number),
   });
 }
 

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { get, put } from "../../../lib/api-client.ts";
 import { vehicleKeys } from "../../vehicles/api/vehicles.ts";
 import { useEvidenceChanged, type VehicleEvidence } from "../../vehicles/api/evidence.ts";
+import { isDefectCaution } from "../../../../shared/domain/cautions.ts";
 import type { ChecksInput, TyresInput } from "../../../../shared/schemas/evidence.ts";
 import type { ChecksSetView, ChecksView, TyresView } from "../../../../server/modules/checks/checks.presenter.ts";
 
@@ -22,7 +23,10 @@ function useChecksWrite<I>(vehicleId: number, send: (input: I) => Promise<Checks
     mutationFn: send,
     onSuccess: (data) => {
       const { tyres, checks, cautions } = data;
-      qc.setQueryData<VehicleEvidence>(vehicleKeys.evidence(vehicleId), (old) => (old ? { ...old, tyres, checks, cautions } : old));
+      // The answer's cautions are the tyres' and checks' own; a defect's caution stays until the evidence is re-read.
+      qc.setQueryData<VehicleEvidence>(vehicleKeys.evidence(vehicleId), (old) =>
+        old ? { ...old, tyres, checks, cautions: [...cautions, ...old.cautions.filter(isDefectCaution)] } : old,
+      );
       void changed(vehicleId);
     },
   });

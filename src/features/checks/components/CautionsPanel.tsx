@@ -1,5 +1,5 @@
 import { useState } from "react";
-import type { Caution } from "../../../../shared/domain/cautions.ts";
+import { isDefectCaution, type Caution } from "../../../../shared/domain/cautions.ts";
 import { Tag } from "./inputs.tsx";
 
 type Shown = Caution & { state: "saved" | "new" | "clears" };
@@ -41,6 +41,7 @@ export function CautionsPanel({ saved, live, editing }: { saved: readonly Cautio
             <p className="mt-1 text-sm">
               The vehicle must be repaired before it is sold for road use. Publishing is blocked until then: fix each item below, then record the new reading or
               check here.
+              {activeBlocks.some(isDefectCaution) ? " A defect that affects safety clears on the walk-around, once it is marked “Repaired before sale”." : null}
             </p>
           ) : null}
           <CautionList cautions={blocks} className="mt-2" />

@@ -1,15 +1,12 @@
 import { useId, useState } from "react";
-import { CHECK_LABELS, CHECK_RESULT_LABELS, CHECK_RESULTS, type CheckItem, type CheckResultCode } from "../../../../shared/constants/evidence.ts";
+import { CHECK_LABELS, CHECK_RESULT_LABELS, CHECK_RESULTS, type CheckItem } from "../../../../shared/constants/evidence.ts";
 import { isSafetyCheckItem } from "../../../../shared/domain/condition-rules.ts";
 import type { CheckForm } from "../form-model.ts";
 import { controlClass, Tag } from "./inputs.tsx";
 
-// The chosen answer shows by its filled radio, a heavier border and bold text; the tint only adds to that.
-const CHOSEN: Record<CheckResultCode, string> = {
-  pass: "border-2 border-signal bg-signal-wash",
-  advise: "border-2 border-ochre bg-ochre-wash",
-  fail: "border-2 border-brick bg-brick-wash",
-};
+// The chosen answer shows by its filled radio, a heavier border and bold text, the same for all three: the words carry
+// the severity, never a traffic-light tint (STYLE.md; the public page reads the same way).
+const CHOSEN = "border-2 border-ink bg-paper-raised";
 
 interface Props {
   item: CheckItem;
@@ -45,7 +42,7 @@ export function CheckRow({ item, value, saved, errors, onChange }: Props) {
             <label
               key={r}
               className={`flex min-h-12 cursor-pointer items-center justify-center gap-2 rounded-md px-2 text-base has-[:disabled]:cursor-default has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-signal ${
-                chosen ? `${CHOSEN[r]} font-bold` : "border border-line-strong bg-paper-raised"
+                chosen ? `${CHOSEN} font-bold` : "border border-line-strong bg-paper-raised"
               }`}
             >
               <input type="radio" name={name} value={r} checked={chosen} onChange={() => onChange({ ...value, result: r })} className="size-5 shrink-0 accent-ink" />

@@ -1,6 +1,6 @@
 import { useMemo, useRef, useState, type FormEvent, type ReactNode } from "react";
 import { CHECK_ITEMS, TYRE_POSITIONS, type CheckItem, type TyrePosition } from "../../../../shared/constants/evidence.ts";
-import { NOT_A_CERTIFICATE } from "../../../../shared/domain/cautions.ts";
+import { isDefectCaution, NOT_A_CERTIFICATE } from "../../../../shared/domain/cautions.ts";
 import { formatTreadDepth } from "../../../../shared/domain/display.ts";
 import type { Role } from "../../../../shared/constants/roles.ts";
 import { can } from "../../../../shared/permissions.ts";
@@ -194,7 +194,8 @@ export function ChecksScreen({ vehicle, dealership, role }: Props) {
         {problem ? <Notice tone="danger" title={problem}>Nothing you typed has been lost; try again.</Notice> : null}
       </div>
 
-      <CautionsPanel saved={ev.cautions} live={live} editing={dirty} />
+      {/* Typing here cannot clear a defect's caution, so it stays in the "as typed" list too. */}
+      <CautionsPanel saved={ev.cautions} live={[...live, ...ev.cautions.filter(isDefectCaution)]} editing={dirty} />
 
       <fieldset disabled={!canEdit} className="m-0 flex min-w-0 flex-col gap-8 border-0 p-0">
         <Part

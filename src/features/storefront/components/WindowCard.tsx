@@ -21,7 +21,7 @@ const t = {
 /**
  * The card for the car on the yard: A5 landscape (half an A4 sheet), read from a few steps away. Big title and
  * price, the figures a buyer compares, the condition index with its sentence, a few features, and the QR code to
- * the full report.
+ * the full report. The revision's cautions are on it word for word, as on the page and its print.
  */
 export function WindowCard({ vehicle }: { vehicle: PublicVehicle }) {
   const s = vehicle.snapshot;
@@ -107,6 +107,21 @@ export function WindowCard({ vehicle }: { vehicle: PublicVehicle }) {
                 </p>
                 <p className={`mt-[0.6cqw] ${t.small}`}>{s.condition.sentence}</p>
               </div>
+              {s.cautions.length ? (
+                <section aria-labelledby="card-cautions" className="rounded-sm border-2 border-ink p-[1.6cqw]">
+                  <h2 id="card-cautions" className={`font-bold ${t.small}`}>
+                    Cautions
+                  </h2>
+                  <ul className={`mt-[0.4cqw] flex flex-col gap-[0.4cqw] ${t.small}`}>
+                    {s.cautions.map((c) => (
+                      <li key={c.code}>
+                        <strong>{c.level === "block" ? "Safety: " : "Advisory: "}</strong>
+                        {c.text}
+                      </li>
+                    ))}
+                  </ul>
+                </section>
+              ) : null}
               <div className="flex items-center gap-[1.6cqw]">
                 <img
                   src={qrCodeUrl(vehicle.slug)}
