@@ -1,4 +1,5 @@
 import { and, asc, desc, eq, inArray, like, lt, or, sql, type SQL } from "drizzle-orm";
+import { can } from "../../../shared/permissions.ts";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import { leadNotes, leads, outbox, revisions, users, vehicles } from "../../db/schema/index.ts";
@@ -94,7 +95,7 @@ export async function updateLead(ctx: AppContext, actor: User, id: number, input
     if (l.version !== input.version) throw staleVersion({ version: l.version, status: l.status });
     if (input.assigneeId) {
       const [u] = await tx.select().from(users).where(and(eq(users.id, input.assigneeId), eq(users.dealershipId, actor.dealershipId), eq(users.active, true)));
-      if (!u || (u.role !== "sales" && u.role !== "admin")) throw badRequest("Assign the lead to an active salesperson or admin.", { assigneeId: "Choose an active salesperson or admin." });
+      if (!u || !can(u, "leads.work")) throw badRequest("Assign the lead to an active salesperson or admin.", { assigneeId: "Choose an active salesperson or admin." });
     }
     const set = {
       ...(input.status ? { status: input.status } : {}),

@@ -1,4 +1,5 @@
 import { eq } from "drizzle-orm";
+import { can } from "../../../shared/permissions.ts";
 import type { User } from "lucia";
 import type { AppContext } from "../../lib/context.ts";
 import { revisionMedia, revisions, vehicleEvents, vehicles, type Dealership, type Vehicle } from "../../db/schema/index.ts";
@@ -73,7 +74,7 @@ export async function publish(ctx: AppContext, actor: User, vehicleId: number, i
       if (!input.overrideReason) {
         throw new AppError(409, "not_ready", `Not ready to publish: ${ready.missing.map((m) => m.label.toLowerCase()).join("; ")}.`, undefined, { readiness: ready });
       }
-      if (actor.role !== "admin") throw forbidden("Only an admin may publish a vehicle that is not ready.");
+      if (!can(actor, "publish.override")) throw forbidden("Only an admin may publish a vehicle that is not ready.");
       // Photos still processing have no served sizes yet; a revision must never point at files still being made.
       if (ready.missing.some((m) => m.code === "photos_processing")) {
         throw new AppError(409, "not_ready", "Photos are still being prepared; wait a minute and publish again.", undefined, { readiness: ready });

@@ -256,7 +256,11 @@ function DefectRow({ defect: d, selected, onShowPin, locale }: { defect: PublicD
           <span className="hidden print:inline">{zoneLabel(d.zone)}: </span>
           {headline(d, locale)}
         </p>
-        {d.safetyRelevant ? <p className="font-bold text-brick">Affects safety: see the cautions below.</p> : null}
+        {d.safetyRelevant ? (
+          <p className="font-bold text-brick">
+            {d.repairPlan === "repaired_before_sale" ? "Affected safety: repaired before sale." : "Affects safety: see the cautions below."}
+          </p>
+        ) : null}
         {d.note ? <p>{d.note}</p> : null}
         <p className="text-sm">
           Repair plan: <strong>{repairPlanLabel(d.repairPlan)}</strong>
