@@ -7,6 +7,7 @@ import {
   FINANCE_APR_MIN_PERCENT,
   FINANCE_MONTHS_MAX,
   FINANCE_MONTHS_MIN,
+  type RepaymentEstimate,
 } from "../domain/finance.ts";
 
 const money = (cents: number): string => (cents / 100).toLocaleString("en", { minimumFractionDigits: 2 });
@@ -47,10 +48,5 @@ export const financeEstimateQuerySchema = z.strictObject({
 });
 export type FinanceEstimateQuery = z.infer<typeof financeEstimateQuerySchema>;
 
-/** The answer: integer cents (shared/domain/finance.ts `RepaymentEstimate`). */
-export interface FinanceEstimateAnswer {
-  paymentCents: number;
-  finalPaymentCents: number;
-  totalCents: number;
-  interestCents: number;
-}
+/** The answer: integer cents, as shared/domain/finance.ts computes it. */
+export type FinanceEstimateAnswer = RepaymentEstimate;

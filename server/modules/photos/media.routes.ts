@@ -18,11 +18,13 @@ export function mediaRoutes(ctx: AppContext): Router {
   router.get("/media/{*key}", async (req, res, next) => {
     // "/media/" alone matches with no key at all (the wildcard is optional): a 404 like any other unknown key.
     const key = ((req.params as { key?: string[] }).key ?? []).join("/");
-    const [exists, published] = KEY_PATTERN.test(key) ? await Promise.all([ctx.storage.exists(key), isPublished(key)]) : [false, false];
+    const exists = KEY_PATTERN.test(key) && (await ctx.storage.exists(key));
     if (!exists) {
       res.status(404).type("text/plain").send("Not found");
       return;
     }
+    // Only for a key that is stored: a missing or mistyped one costs no query.
+    const published = await isPublished(key);
     res.setHeader("Content-Type", TYPES[key.split(".").pop()!]);
     res.setHeader("X-Content-Type-Options", "nosniff");
     res.setHeader("Cache-Control", `${published ? "public" : "private"}, max-age=31536000, immutable`);

@@ -7,6 +7,7 @@ import { photoParams, vehicleIdParams, versionQuery } from "../../../shared/sche
 import { photoOrderSchema, photoUpdateSchema } from "../../../shared/schemas/evidence.ts";
 import { PHOTO_LIMITS } from "../../../shared/constants/evidence.ts";
 import * as service from "./photos.service.ts";
+import { presentUpload } from "./photos.presenter.ts";
 
 /** Mounted at /api/vehicles/:id/photos. */
 export function photosRoutes(ctx: AppContext): Router {
@@ -27,7 +28,7 @@ export function photosRoutes(ctx: AppContext): Router {
         const first = refused[0];
         throw new AppError(first.status, first.code, refused.length === 1 ? first.reason : "None of the files could be used.", undefined, { refused });
       }
-      return { photos: accepted, refused };
+      return presentUpload(accepted, refused);
     }),
   );
 

@@ -15,4 +15,3 @@ export function presentUser(user: DbUser): UserView {
   };
 }
 
-// The session's user is the auth module's answer; auth.routes.ts still imports it from here.

@@ -52,13 +52,6 @@ export function topError<E extends Error>(error: E | null): E | null {
   return error && !(isApiError(error) && Object.keys(error.fields).length) ? error : null;
 }
 
-/** The message RHF holds for a dotted field path, for Field's `error`. */
-export function messageAt(errors: object, path: string): string | undefined {
-  let node: unknown = errors;
-  for (const part of path.split(".")) node = node && typeof node === "object" ? (node as Record<string, unknown>)[part] : undefined;
-  const message = node && typeof node === "object" ? (node as { message?: unknown }).message : undefined;
-  return typeof message === "string" ? message : undefined;
-}
 
 /** RHF's nested errors as zodFields' dotted keys (`filter.priceMinCents`, `columns.2.header`), for widgets that take the flat map. */
 export function flatErrors(errors: object, prefix = ""): Record<string, string> {

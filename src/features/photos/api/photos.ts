@@ -3,7 +3,7 @@ import { ApiError, del, get, isApiError, patch, put } from "../../../lib/api-cli
 import { vehicleKeys } from "../../vehicles/api/vehicles.ts";
 import type { PhotoView, UploadResult } from "../../../../server/modules/photos/photos.presenter.ts";
 
-export type { PhotoView, UploadResult };
+export type { PhotoView };
 
 interface PhotoList {
   photos: PhotoView[];

@@ -258,7 +258,7 @@ function DefectRow({ defect: d, selected, onShowPin, locale }: { defect: PublicD
         </p>
         {d.safetyRelevant ? (
           <p className="font-bold text-brick">
-            {d.repairPlan === "repaired_before_sale" ? "Affected safety: repaired before sale." : "Affects safety: see the cautions below."}
+            {d.repairPlan === "repaired_before_sale" ? "Safety item: repaired before sale." : "Affects safety: see the cautions below."}
           </p>
         ) : null}
         {d.note ? <p>{d.note}</p> : null}
