@@ -69,5 +69,6 @@ describe("GET /api/public/finance-estimate", () => {
     expect(Object.keys(missing.body.error.fields)).toEqual(["months"]);
     const extra = await request(t.app).get(URL).query({ ...good, deposit: "1" });
     expect(extra.status).toBe(400);
+    expect(JSON.stringify(extra.body.error)).toContain("deposit");
   });
 });

@@ -86,6 +86,7 @@ describe("sign-in limits", () => {
     const [rows] = await t.ctx.database.pool.query("select `key` from rate_limits");
     const keys = (rows as Array<{ key: string }>).map((r) => r.key);
     expect(keys).toEqual(expect.arrayContaining(["sign_in_ip:192.0.2.1", "sign_in_account:sales@demo.test", expect.stringMatching(/^sign_in_pair:[0-9a-f]{64}$/), expect.stringMatching(/^sign_in_known:[0-9a-f]{64}$/)]));
+    for (const k of keys.filter((key) => /^sign_in_(pair|known):/.test(key))) expect(k).toMatch(/^sign_in_(pair|known):[0-9a-f]{64}$/);
   });
 });
 
