@@ -17,11 +17,8 @@ export const versionSchema = z.number({ error: "The record's version is missing.
 
 // Path parameters: one schema per shape, shared by every route that has it (server/middleware/route.ts `params`).
 // Digits only: coercion took "0x0b", " 11" and "1e3" for 11 and 1000. int() keeps it a safe integer.
-const positiveId = z
-  .string()
-  .regex(/^[0-9]{1,16}$/, "An id is written in digits only.")
-  .transform(Number)
-  .pipe(z.number().int().positive());
+const digits = (message: string) => z.string().regex(/^[0-9]{1,16}$/, message).transform(Number).pipe(z.number().int().positive());
+const positiveId = digits("An id is written in digits only.");
 
 /** `:id` of a record with a numeric id: a lead, a feed, a captured mail. */
 export const idParams = z.object({ id: positiveId });
@@ -41,4 +38,4 @@ export const revisionParams = slugParams.extend({ number: positiveId });
 export const tokenParams = z.object({ token: z.string() });
 
 /** `?version=` of a delete: the version the caller last saw. */
-export const versionQuery = z.object({ version: z.coerce.number().int().min(1) });
+export const versionQuery = z.object({ version: digits("The version is a whole number written in digits.") });
