@@ -102,16 +102,23 @@ export function useUpdatePhoto(vehicleId: number) {
   return useMutation({
     mutationFn: async ({ id, ...input }: { id: number; version: number; caption?: string; zone?: string | null; isCover?: true }) => {
       const path = `/api/vehicles/${vehicleId}/photos/${id}`;
+      // The photo worker moves a photo's version when its sizes are made. Only that, with caption, zone and cover as the
+      // person saw them, leaves the edit theirs to make on the current version; anyone else's edit stays a conflict.
+      const seen = qc.getQueryData<PhotoList>(vehicleKeys.photos(vehicleId))?.photos.find((p) => p.id === id);
+      const onlyProcessed = (now: PhotoView | undefined): now is PhotoView =>
+        !!now && !!seen && now.caption === seen.caption && now.zone === seen.zone && now.isCover === seen.isCover;
+      let version = input.version;
+      if (seen?.status === "processing") {
+        // Still processing as last read: ask for its version first, so the edit is not refused when the sizes are done.
+        const now = (await get<PhotoList>(`/api/vehicles/${vehicleId}/photos`)).photos.find((p) => p.id === id);
+        if (onlyProcessed(now)) version = now.version;
+      }
       try {
-        return await patch<{ photo: PhotoView }>(path, input);
+        return await patch<{ photo: PhotoView }>(path, { ...input, version });
       } catch (e) {
-        // The photo worker moves a photo's version when its sizes are made. If that is all that changed since this
-        // screen read it (caption, zone and cover as the person saw them), the edit is theirs to make: send it again
-        // on the current version. Anyone else's edit still comes back as the conflict.
+        // The sizes were finished between that read and the edit.
         const current = isApiError(e) && e.code === "stale_version" ? (e.details.current as PhotoView | undefined) : undefined;
-        const seen = qc.getQueryData<PhotoList>(vehicleKeys.photos(vehicleId))?.photos.find((p) => p.id === id);
-        const onlyProcessed = current && seen && current.caption === seen.caption && current.zone === seen.zone && current.isCover === seen.isCover;
-        if (!onlyProcessed) throw e;
+        if (!onlyProcessed(current)) throw e;
         return patch<{ photo: PhotoView }>(path, { ...input, version: current.version });
       }
     },
